@@ -1,0 +1,43 @@
+import { sqliteTable, text, uniqueIndex, index } from "drizzle-orm/sqlite-core";
+import { createdAt, id, updatedAt } from "./columns";
+import { firm } from "./firm";
+import { user } from "./auth";
+
+export const PROJECT_ROLES = ["consultant", "architect", "installer", "client"] as const;
+export type ProjectRole = (typeof PROJECT_ROLES)[number];
+
+export const project = sqliteTable("project", {
+  id: id(),
+  firmId: text("firm_id")
+    .notNull()
+    .references(() => firm.id),
+  name: text("name").notNull(),
+  reference: text("reference"),
+  site: text("site"),
+  createdBy: text("created_by").references(() => user.id, { onDelete: "set null" }),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+// One role per person per project: a second membership for the same person is refused.
+export const membership = sqliteTable(
+  "membership",
+  {
+    id: id(),
+    projectId: text("project_id")
+      .notNull()
+      .references(() => project.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    role: text("role", { enum: PROJECT_ROLES }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("membership_project_user_uq").on(t.projectId, t.userId),
+    index("membership_user_idx").on(t.userId),
+  ],
+);
+
+export type Project = typeof project.$inferSelect;
+export type Membership = typeof membership.$inferSelect;

@@ -1,0 +1,30 @@
+import { real, sqliteTable, text, index } from "drizzle-orm/sqlite-core";
+import { createdAt, id, updatedAt } from "./columns";
+import { project } from "./project";
+
+export const ROOM_USES = ["music", "speech", "teaching", "sport", "office", "dining", "other"] as const;
+export type RoomUse = (typeof ROOM_USES)[number];
+
+// A room of a project. Lengths in metres, temperature in °C, humidity in %.
+export const room = sqliteTable(
+  "room",
+  {
+    id: id(),
+    projectId: text("project_id")
+      .notNull()
+      .references(() => project.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    use: text("use", { enum: ROOM_USES }).notNull(),
+    length: real("length"),
+    width: real("width"),
+    height: real("height"),
+    volume: real("volume"),
+    temperature: real("temperature").notNull().default(20),
+    humidity: real("humidity").notNull().default(50),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("room_project_idx").on(t.projectId)],
+);
+
+export type Room = typeof room.$inferSelect;

@@ -1,0 +1,70 @@
+import fs from "node:fs";
+import path from "node:path";
+import crypto from "node:crypto";
+import { z } from "zod";
+
+// The one module that reads process.env. Everything else asks env().
+const envSchema = z.object({
+  CAVITAS_DATA_DIR: z.string().min(1).default(".data"),
+  CAVITAS_DATABASE: z.string().min(1).optional(),
+  CAVITAS_APP_URL: z.url().default("http://localhost:3000"),
+  CAVITAS_SMTP_HOST: z.string().min(1).default("127.0.0.1"),
+  CAVITAS_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  CAVITAS_MAIL_HTTP_PORT: z.coerce.number().int().min(1).max(65535).default(1080),
+  CAVITAS_MAIL_FROM: z.string().min(3).default("Cavitas <noreply@cavitas.example.test>"),
+  CAVITAS_UPLOAD_LIMIT_MB: z.coerce.number().positive().default(20),
+  BETTER_AUTH_SECRET: z.string().min(32).optional(),
+});
+
+export type Env = {
+  dataDir: string;
+  databasePath: string;
+  appUrl: string;
+  smtpHost: string;
+  smtpPort: number;
+  mailHttpPort: number;
+  mailFrom: string;
+  uploadLimitBytes: number;
+  authSecret: string;
+};
+
+let cached: Env | null = null;
+
+export function env(): Env {
+  if (cached) return cached;
+  const parsed = envSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join("\n")}`);
+  }
+  const e = parsed.data;
+  const dataDir = path.resolve(e.CAVITAS_DATA_DIR);
+  fs.mkdirSync(dataDir, { recursive: true });
+  cached = {
+    dataDir,
+    databasePath: path.resolve(e.CAVITAS_DATABASE ?? path.join(dataDir, "cavitas.sqlite")),
+    appUrl: e.CAVITAS_APP_URL.replace(/\/$/, ""),
+    smtpHost: e.CAVITAS_SMTP_HOST,
+    smtpPort: e.CAVITAS_SMTP_PORT,
+    mailHttpPort: e.CAVITAS_MAIL_HTTP_PORT,
+    mailFrom: e.CAVITAS_MAIL_FROM,
+    uploadLimitBytes: Math.round(e.CAVITAS_UPLOAD_LIMIT_MB * 1024 * 1024),
+    authSecret: e.BETTER_AUTH_SECRET ?? localSecret(dataDir),
+  };
+  return cached;
+}
+
+// Without a configured secret, one is made once per data folder and kept there, so a
+// fresh machine needs no hand-made .env and sessions survive restarts.
+function localSecret(dataDir: string): string {
+  const file = path.join(dataDir, "auth-secret");
+  try {
+    const existing = fs.readFileSync(file, "utf8").trim();
+    if (existing.length >= 32) return existing;
+  } catch {
+    // not there yet
+  }
+  const secret = crypto.randomBytes(32).toString("hex");
+  fs.writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}

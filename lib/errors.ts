@@ -1,0 +1,42 @@
+// Typed domain errors. Services throw these; one function (lib/http/respond.ts) maps them
+// to HTTP. The client sees the message and, for bad input, the field it concerns.
+export type ErrorCode =
+  | "unauthenticated"
+  | "forbidden"
+  | "not_found"
+  | "conflict"
+  | "gone"
+  | "invalid"
+  | "bad_request";
+
+export type FieldIssue = { field: string; message: string };
+
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly issues: FieldIssue[];
+
+  constructor(code: ErrorCode, message: string, issues: FieldIssue[] = []) {
+    super(message);
+    this.code = code;
+    this.issues = issues;
+  }
+}
+
+export const unauthenticated = () => new AppError("unauthenticated", "Sign in to continue.");
+export const forbidden = (message: string) => new AppError("forbidden", message);
+export const notFound = (what: string) => new AppError("not_found", `${what} was not found.`);
+export const conflict = (message: string, field?: string) =>
+  new AppError("conflict", message, field ? [{ field, message }] : []);
+export const gone = (message: string) => new AppError("gone", message);
+export const invalid = (issues: FieldIssue[], message = "Some fields need attention.") =>
+  new AppError("invalid", message, issues);
+
+export const STATUS: Record<ErrorCode, number> = {
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  gone: 410,
+  invalid: 422,
+  bad_request: 400,
+};
