@@ -1,0 +1,26 @@
+/** The calculation contract of SPEC.md section 6: schemas, parsing and the five calculations. */
+export {
+  airInputSchema,
+  evaluateInputSchema,
+  rateInputSchema,
+  resonatorInputSchema,
+  reverbInputSchema,
+  type AirInput,
+  type EvaluateInput,
+  type RateInput,
+  type ResonatorInput,
+  type ReverbInput,
+} from "./schemas";
+export {
+  CONTRACT_COMMANDS,
+  contractSchemas,
+  fieldErrors,
+  isContractCommand,
+  parseContractInput,
+  type ContractCommand,
+  type ContractInput,
+  type FieldError,
+  type ParseResult,
+} from "./parse";
+export { runAir, runEvaluate, runRate, runResonator, runReverb, toBuildUp, type EvaluateOutput } from "./run";
+export { runContract, type ContractResult } from "./dispatch";

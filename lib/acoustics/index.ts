@@ -1,0 +1,20 @@
+/**
+ * Cavitas's acoustics engine: pure TypeScript, no framework, no database. See CONTRACT.md for
+ * the calculation contract and REFERENCES.md section 0 for the model variants.
+ */
+export * from "./air";
+export * from "./air-absorption";
+export * from "./bands";
+export * from "./build-up";
+export * from "./end-corrections";
+export * from "./evaluate";
+export * from "./facing-impedance";
+export * from "./helmholtz";
+export * from "./incidence";
+export * from "./layered-model";
+export * from "./perforation";
+export * from "./porous";
+export * from "./ratings";
+export * from "./reverberation";
+export * from "./warnings";
+export * from "./contract";
