@@ -38,11 +38,11 @@ export function env(): Env {
     throw new Error(`Invalid environment:\n${lines.join("\n")}`);
   }
   const e = parsed.data;
-  const dataDir = path.resolve(e.CAVITAS_DATA_DIR);
+  const dataDir = path.resolve(/*turbopackIgnore: true*/ e.CAVITAS_DATA_DIR);
   fs.mkdirSync(dataDir, { recursive: true });
   cached = {
     dataDir,
-    databasePath: path.resolve(e.CAVITAS_DATABASE ?? path.join(dataDir, "cavitas.sqlite")),
+    databasePath: path.resolve(/*turbopackIgnore: true*/ e.CAVITAS_DATABASE ?? path.join(dataDir, "cavitas.sqlite")),
     appUrl: e.CAVITAS_APP_URL.replace(/\/$/, ""),
     smtpHost: e.CAVITAS_SMTP_HOST,
     smtpPort: e.CAVITAS_SMTP_PORT,

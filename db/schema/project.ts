@@ -3,8 +3,9 @@ import { createdAt, id, updatedAt } from "./columns";
 import { firm } from "./firm";
 import { user } from "./auth";
 
-export const PROJECT_ROLES = ["consultant", "architect", "installer", "client"] as const;
-export type ProjectRole = (typeof PROJECT_ROLES)[number];
+import { PROJECT_ROLES } from "../../lib/roles";
+
+export { PROJECT_ROLES, type ProjectRole } from "../../lib/roles";
 
 export const project = sqliteTable("project", {
   id: id(),

@@ -2,8 +2,9 @@ import { real, sqliteTable, text, index } from "drizzle-orm/sqlite-core";
 import { createdAt, id, updatedAt } from "./columns";
 import { project } from "./project";
 
-export const ROOM_USES = ["music", "speech", "teaching", "sport", "office", "dining", "other"] as const;
-export type RoomUse = (typeof ROOM_USES)[number];
+import { ROOM_USES } from "../../lib/room-uses";
+
+export { ROOM_USES, type RoomUse } from "../../lib/room-uses";
 
 // A room of a project. Lengths in metres, temperature in °C, humidity in %.
 export const room = sqliteTable(

@@ -1,0 +1,22 @@
+import type { Metadata } from "next";
+import { redirect } from "next/navigation";
+import { SignInForm } from "@/components/auth/sign-in-form";
+import { currentActor } from "@/lib/auth/current";
+
+export const metadata: Metadata = { title: "Sign in" };
+export const dynamic = "force-dynamic";
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string }> }) {
+  const { next } = await searchParams;
+  const safeNext = next && next.startsWith("/") && !next.startsWith("//") ? next : "/projects";
+  if (await currentActor()) redirect(safeNext);
+  return (
+    <>
+      <h1 className="text-2xl font-semibold">Sign in</h1>
+      <p className="mt-2 text-sm text-ink-soft">Use the e-mail address your invitation was sent to.</p>
+      <div className="mt-8">
+        <SignInForm next={safeNext} />
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,8 @@
+import { redirect } from "next/navigation";
+import { currentActor } from "@/lib/auth/current";
+
+export const dynamic = "force-dynamic";
+
+export default async function Home() {
+  redirect((await currentActor()) ? "/projects" : "/sign-in");
+}
