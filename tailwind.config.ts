@@ -16,8 +16,8 @@ const config: Config = {
         sage: { DEFAULT: "#4f6f52", soft: "#d9e4d6" },
       },
       fontFamily: {
-        sans: ["var(--font-text)", "system-ui", "sans-serif"],
-        mono: ["var(--font-figures)", "ui-monospace", "monospace"],
+        sans: ["var(--font-text)", "var(--font-greek)", "system-ui", "sans-serif"],
+        mono: ["var(--font-figures)", "var(--font-greek)", "ui-monospace", "monospace"],
       },
       borderRadius: { sheet: "3px" },
     },

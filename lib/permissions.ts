@@ -1,4 +1,4 @@
-import type { ProjectRole } from "@/db/schema/project";
+import type { ProjectRole } from "@/lib/roles";
 
 // The permissions table of the product specification (section 2), as data. The guard reads
 // it, the role test walks it, and screens use it only to hide what the server would refuse.

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { PROJECT_ROLES } from "@/db/schema/project";
+import { PROJECT_ROLES } from "@/lib/roles";
 import { emailField, nameField } from "./common";
 import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
 
