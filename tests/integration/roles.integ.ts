@@ -1,0 +1,212 @@
+import fs from "node:fs";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { useTestEnvironment } from "../support/test-env";
+import { addMember, makeFirm, makeProject, makeUser, uniqueEmail } from "../support/factories";
+import { call, signIn } from "../support/http";
+import { roleMay, type ProjectAction } from "@/lib/permissions";
+import { PROJECT_ROLES, type ProjectRole } from "@/lib/roles";
+import { tableCounts } from "../support/counts";
+
+// Walks every guarded route handler for every project role, for a signed-in outsider, and
+// for no session. Expectations come from the permissions table (lib/permissions.ts, the
+// product specification's section 2), so the table and the server cannot drift apart.
+
+type Who = ProjectRole | "outsider" | "admin" | "none";
+const EVERYONE: Who[] = [...PROJECT_ROLES, "outsider", "admin", "none"];
+
+let envHandle: Awaited<ReturnType<typeof useTestEnvironment>>;
+let projectId = "";
+const cookies = {} as Record<Exclude<Who, "none">, string>;
+const emails = {} as Record<Exclude<Who, "none">, string>;
+
+beforeAll(async () => {
+  envHandle = await useTestEnvironment();
+  const firm = makeFirm();
+  const project = makeProject(firm.id);
+  projectId = project.id;
+  for (const role of PROJECT_ROLES) {
+    const u = await makeUser({ firmId: role === "consultant" ? firm.id : null });
+    addMember(project.id, u.id, role);
+    emails[role] = u.email;
+    cookies[role] = await signIn(u.email);
+  }
+  const outsider = await makeUser({ firmId: firm.id });
+  emails.outsider = outsider.email;
+  cookies.outsider = await signIn(outsider.email);
+  const admin = await makeUser({ firmId: firm.id, isFirmAdmin: true });
+  emails.admin = admin.email;
+  cookies.admin = await signIn(admin.email);
+});
+afterAll(() => envHandle.cleanup());
+
+// A fresh open invitation made by the consultant, for the routes that act on one.
+async function freshInvitation(): Promise<{ id: string; token: string }> {
+  const { inviteToProject } = await import("@/lib/services/invitations");
+  const { actorFromHeaders } = await import("@/lib/auth/session");
+  const actor = await actorFromHeaders(new Headers({ cookie: cookies.consultant }));
+  const email = uniqueEmail("invitee");
+  const { invitation } = await inviteToProject(actor, projectId, { email, role: "architect" });
+  const mail = envHandle.mail.messages.find((m) => m.to.includes(email))!;
+  const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)![1];
+  return { id: invitation.id, token };
+}
+
+type Endpoint = {
+  key: string; // "METHOD /api/v1/..." as the file system names it
+  load: () => Promise<Record<string, any>>;
+  method: "GET" | "POST" | "PATCH" | "DELETE";
+  writes: boolean;
+  prepare?: () => Promise<{ params?: Record<string, string>; body?: unknown }>;
+  expected: (who: Who) => number;
+};
+
+const projectRule = (action: ProjectAction, okStatus: number) => (who: Who) => {
+  if (who === "none") return 401;
+  if (who === "outsider" || who === "admin") return 404;
+  return roleMay(who, action) ? okStatus : 403;
+};
+const signedIn = (okStatus: number) => (who: Who) => (who === "none" ? 401 : okStatus);
+
+const ENDPOINTS: Endpoint[] = [
+  { key: "GET /api/v1/me", method: "GET", writes: false, load: () => import("@/app/api/v1/me/route"), expected: signedIn(200) },
+  {
+    key: "PATCH /api/v1/me",
+    method: "PATCH",
+    writes: true,
+    load: () => import("@/app/api/v1/me/route"),
+    prepare: async () => ({ body: { unitPreference: "imperial" } }),
+    expected: signedIn(200),
+  },
+  { key: "GET /api/v1/projects", method: "GET", writes: false, load: () => import("@/app/api/v1/projects/route"), expected: signedIn(200) },
+  {
+    key: "POST /api/v1/projects",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/route"),
+    prepare: async () => ({ body: { name: "Another project (fictional)" } }),
+    // Creating a project is for members of a consultancy (who become its consultant).
+    expected: (who) => (who === "none" ? 401 : ["consultant", "outsider", "admin"].includes(who) ? 201 : 403),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("project.view", 200),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/members",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/members/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("team.view", 200),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/invitations",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/invitations/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("team.invite", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/invitations",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/invitations/route"),
+    prepare: async () => ({ params: { projectId }, body: { email: uniqueEmail(), role: "client" } }),
+    expected: projectRule("team.invite", 201),
+  },
+  {
+    key: "DELETE /api/v1/projects/[projectId]/invitations/[invitationId]",
+    method: "DELETE",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/invitations/[invitationId]/route"),
+    prepare: async () => ({ params: { projectId, invitationId: (await freshInvitation()).id } }),
+    expected: projectRule("team.invite", 200),
+  },
+  {
+    key: "GET /api/v1/invitations/[token]",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/invitations/[token]/route"),
+    prepare: async () => ({ params: { token: (await freshInvitation()).token } }),
+    // Public: the token in the link is the secret; it shows only what the e-mail said.
+    expected: () => 200,
+  },
+  {
+    key: "POST /api/v1/invitations/[token]/accept",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/invitations/[token]/accept/route"),
+    prepare: async () => ({ params: { token: (await freshInvitation()).token } }),
+    // Nobody here is the invitee, so everybody signed in is refused.
+    expected: (who) => (who === "none" ? 401 : 403),
+  },
+  { key: "GET /api/v1/firm/accounts", method: "GET", writes: false, load: () => import("@/app/api/v1/firm/accounts/route"), expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403) },
+  {
+    key: "POST /api/v1/firm/invitations",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/firm/invitations/route"),
+    prepare: async () => ({ body: { email: uniqueEmail("colleague") } }),
+    expected: (who) => (who === "none" ? 401 : who === "admin" ? 201 : 403),
+  },
+];
+
+// Every exported handler under app/api/v1 must be listed above.
+function routeHandlersOnDisk(): string[] {
+  const root = path.join(process.cwd(), "app", "api", "v1");
+  const found: string[] = [];
+  const walk = (dir: string) => {
+    for (const e of fs.readdirSync(dir, { withFileTypes: true })) {
+      const full = path.join(dir, e.name);
+      if (e.isDirectory()) walk(full);
+      else if (e.name === "route.ts") {
+        const src = fs.readFileSync(full, "utf8");
+        const route = "/" + path.relative(path.join(process.cwd(), "app"), path.dirname(full)).split(path.sep).join("/");
+        for (const m of src.matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)) found.push(`${m[1]} ${route}`);
+      }
+    }
+  };
+  walk(root);
+  return found.sort();
+}
+
+describe("role walk", () => {
+  it("lists every route handler under app/api/v1", () => {
+    const listed = ENDPOINTS.map((e) => e.key).concat(EXTRA_KEYS).sort();
+    expect(listed).toEqual(routeHandlersOnDisk());
+  });
+
+  for (const endpoint of ENDPOINTS) {
+    describe(endpoint.key, () => {
+      for (const who of EVERYONE) {
+        const status = endpoint.expected(who);
+        it(`${who} → ${status}`, async () => {
+          const mod = await endpoint.load();
+          const prep = (await endpoint.prepare?.()) ?? {};
+          const before = tableCounts();
+          const res = await call(mod[endpoint.method], {
+            method: endpoint.method,
+            cookie: who === "none" ? null : cookies[who],
+            params: prep.params,
+            body: prep.body,
+          });
+          expect(res.status, JSON.stringify(res.json)).toBe(status);
+          if (status >= 400) {
+            expect(res.json.error.message).toBeTruthy();
+            // A guard that refuses writes nothing.
+            if (endpoint.writes) expect(tableCounts()).toEqual(before);
+          }
+        });
+      }
+    });
+  }
+});
+
+// Routes of later capabilities register their own role walks; their keys are listed here.
+import { EXTRA_KEYS } from "../support/extra-route-keys";

@@ -1,0 +1,3 @@
+// Route handlers whose role checks are walked in their own test files (for example the
+// calculation contract routes in tests/integration/calc-api.integ.ts).
+export const EXTRA_KEYS: string[] = [];
