@@ -6,10 +6,12 @@
 import { airProperties } from "./air";
 import { OCTAVE_LABELS, SAMPLES_PER_BAND, THIRD_OCTAVE_LABELS, bandMeans, octavesFromThirds, thirdOctaveSamples } from "./bands";
 import { type BuildUp, cavityLayers, effectiveThickness, facingOpenArea } from "./build-up";
+import { type CavityCache, cavityTable, fillFromTable } from "./cavity-cache";
 import { lumpedPanelHz } from "./helmholtz";
-import { DEFAULT_ANGLES, FIELD_INCIDENCE_LIMIT_DEG, type Quadrature, fieldQuadrature, locallyReactingField, obliqueAbsorption } from "./incidence";
+import { DEFAULT_ANGLES, FIELD_INCIDENCE_LIMIT_DEG, fieldQuadrature } from "./incidence";
 import { LayeredModel } from "./layered-model";
 import { findPeak } from "./peak";
+import { clampNegative, fillSpectrum } from "./spectrum";
 import { type Warning, buildUpWarnings } from "./warnings";
 
 export interface EvaluateOptions {
@@ -21,6 +23,8 @@ export interface EvaluateOptions {
   samplesPerBand?: number;
   /** search the full-model peak (true); a sweep may skip it */
   peak?: boolean;
+  /** keep cavity tables between evaluations that differ only in the facing */
+  cavityCache?: CavityCache;
 }
 
 export interface BandValue {
@@ -42,54 +46,6 @@ export interface Evaluation {
   warnings: Warning[];
 }
 
-export function buildUpModel(buildUp: BuildUp): LayeredModel {
-  return new LayeredModel(buildUp.facing, cavityLayers(buildUp.cavity, buildUp.infill), airProperties(buildUp.air));
-}
-
-/**
- * Normal and field-incidence absorption at the given frequencies. A partitioned cavity is
- * locally reacting: its normal-incidence impedance serves every angle, computed once per
- * frequency. An open cavity reacts extendedly: every layer is evaluated at each angle.
- */
-export function fillSpectrum(
-  model: LayeredModel,
-  locallyReacting: boolean,
-  frequencies: ArrayLike<number>,
-  q: Quadrature,
-  normal: Float64Array,
-  diffuse: Float64Array,
-): void {
-  for (let k = 0; k < frequencies.length; k++) {
-    model.setFrequency(frequencies[k]);
-    model.impedance(1, 0);
-    normal[k] = obliqueAbsorption(model.zr, model.zi, 1);
-    if (locallyReacting) {
-      diffuse[k] = locallyReactingField(model.zr, model.zi, q);
-      continue;
-    }
-    let sum = 0;
-    for (let i = 0; i < q.n; i++) {
-      const cos = q.cos[i];
-      model.impedance(cos, q.sin2[i]);
-      sum += q.weight[i] * obliqueAbsorption(model.zr, model.zi, cos);
-    }
-    diffuse[k] = sum;
-  }
-}
-
-/** Absorption of a build-up at arbitrary frequencies (for curves). */
-export function absorptionSpectrum(
-  buildUp: BuildUp,
-  frequencies: ArrayLike<number>,
-  options: Pick<EvaluateOptions, "angles" | "maxAngleDeg"> = {},
-): { normal: Float64Array; diffuse: Float64Array } {
-  const q = fieldQuadrature(options.angles ?? DEFAULT_ANGLES, options.maxAngleDeg ?? FIELD_INCIDENCE_LIMIT_DEG);
-  const normal = new Float64Array(frequencies.length);
-  const diffuse = new Float64Array(frequencies.length);
-  fillSpectrum(buildUpModel(buildUp), buildUp.cavity.partitioned, frequencies, q, normal, diffuse);
-  return { normal, diffuse };
-}
-
 export function evaluateBuildUp(buildUp: BuildUp, options: EvaluateOptions = {}): Evaluation {
   const air = airProperties(buildUp.air);
   const n = options.samplesPerBand ?? SAMPLES_PER_BAND;
@@ -98,7 +54,15 @@ export function evaluateBuildUp(buildUp: BuildUp, options: EvaluateOptions = {})
   const model = new LayeredModel(buildUp.facing, cavityLayers(buildUp.cavity, buildUp.infill), air);
   const normal = new Float64Array(freqs.length);
   const diffuse = new Float64Array(freqs.length);
-  fillSpectrum(model, buildUp.cavity.partitioned, freqs, q, normal, diffuse);
+  const local = buildUp.cavity.partitioned;
+  if (options.cavityCache) {
+    const build = () => cavityTable(model, local, freqs, q);
+    const table = options.cavityCache.table(buildUp.cavity, buildUp.infill, air, freqs, q, build);
+    fillFromTable(model.facing, table, local, freqs, q, normal, diffuse);
+  } else {
+    fillSpectrum(model, local, freqs, q, normal, diffuse);
+  }
+  const clamped = Math.max(clampNegative(normal), clampNegative(diffuse));
 
   const normalBands = bandMeans(normal, n);
   const diffuseBands = bandMeans(diffuse, n);
@@ -118,6 +82,6 @@ export function evaluateBuildUp(buildUp: BuildUp, options: EvaluateOptions = {})
     quarterWaveHz,
     thirdOctaves: THIRD_OCTAVE_LABELS.map((f, i) => ({ f, normal: normalBands[i], diffuse: diffuseBands[i] })),
     octaves: OCTAVE_LABELS.map((f, i) => ({ f, normal: normalOctaves[i], diffuse: diffuseOctaves[i] })),
-    warnings: buildUpWarnings(buildUp, air, helmholtzHz, peak),
+    warnings: buildUpWarnings({ buildUp, air, helmholtzHz, peak, clampedUpToHz: clamped >= 0 ? freqs[clamped] : null }),
   };
 }

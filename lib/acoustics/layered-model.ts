@@ -10,40 +10,40 @@
  * Oblique incidence at trace wavenumber k0 sinθ: air kz = k0 cosθ, Zz = ρ0c/cosθ; porous
  * kz = sqrt(kc² − k0² sin²θ), Zz = Zc kc/kz.
  *
- * Complex arithmetic is written out on (re, im) pairs; nothing is allocated per frequency.
+ * Complex arithmetic is written out on (re, im) pairs, one layer at a time over all angles of a
+ * frequency (independent angles keep the processor busy); nothing is allocated per frequency.
  */
-import { type Air } from "./air";
+import type { Air } from "./air";
 import type { Facing, Layer } from "./build-up";
 import { FacingImpedance } from "./facing-impedance";
+import type { Quadrature } from "./incidence";
 import { porousCharacteristics } from "./porous";
 
 const TINY = 1e-12;
+const NORMAL_COS = Float64Array.of(1);
+const NORMAL_SIN2 = Float64Array.of(0);
 
 export class LayeredModel {
-  /** normalised surface impedance after `impedance()` */
+  /** normalised surface impedance at normal incidence after `impedance()` */
   zr = 0;
   zi = 0;
   readonly facing: FacingImpedance;
   private readonly count: number;
-  private readonly porous: Uint8Array;
-  private readonly thickness: Float64Array;
   private readonly layers: Layer[];
+  private readonly thickness: Float64Array;
   /** per porous layer: Zc.re, Zc.im, kc.re, kc.im at the current frequency */
   private readonly fluid: Float64Array;
   private readonly rho: number;
   private readonly c: number;
   private k0 = 0;
+  private re = new Float64Array(16);
+  private im = new Float64Array(16);
 
   constructor(facing: Facing | null, layers: Layer[], air: Air) {
     this.layers = layers.filter((layer) => layer.thickness > 0);
     this.count = this.layers.length;
-    this.porous = new Uint8Array(this.count);
-    this.thickness = new Float64Array(this.count);
+    this.thickness = Float64Array.from(this.layers, (layer) => layer.thickness);
     this.fluid = new Float64Array(4 * this.count);
-    this.layers.forEach((layer, i) => {
-      this.porous[i] = layer.kind === "porous" ? 1 : 0;
-      this.thickness[i] = layer.thickness;
-    });
     this.facing = new FacingImpedance(facing, air);
     this.rho = air.rho;
     this.c = air.c;
@@ -61,31 +61,63 @@ export class LayeredModel {
     }
   }
 
-  /** Surface impedance at the angle whose cosine and squared sine are given. */
-  impedance(cos: number, sin2: number): void {
-    let br = 0;
-    let bi = 0;
-    const k0 = this.k0;
+  /** Normal-incidence surface impedance into zr, zi. */
+  impedance(): void {
+    this.layerImpedances(NORMAL_COS, NORMAL_SIN2, 1);
+    this.zr = this.re[0] + this.facing.zr;
+    this.zi = this.im[0] + this.facing.zi;
+  }
+
+  /** Normal-incidence absorption at f. */
+  normalAbsorption(f: number): number {
+    this.setFrequency(f);
+    this.impedance();
+    const a = this.zr;
+    return (4 * a) / ((a + 1) * (a + 1) + this.zi * this.zi);
+  }
+
+  /** Extended reaction: field-incidence absorption with every layer at each angle. */
+  fieldAbsorption(q: Quadrature): number {
+    this.layerImpedances(q.cos, q.sin2, q.n);
+    return fieldSum(this.re, this.im, 0, this.facing.zr, this.facing.zi, q);
+  }
+
+  /** The cavity alone (no facing) at the angles of q, copied into re, im from offset. */
+  cavityImpedances(q: Quadrature, re: Float64Array, im: Float64Array, offset: number): void {
+    this.layerImpedances(q.cos, q.sin2, q.n);
+    re.set(this.re.subarray(0, q.n), offset);
+    im.set(this.im.subarray(0, q.n), offset);
+  }
+
+  /** Impedances of the layers on the backing at n angles (cosines, squared sines) into re, im. */
+  private layerImpedances(cos: Float64Array, sin2: Float64Array, n: number): void {
+    if (this.re.length < n) {
+      this.re = new Float64Array(n);
+      this.im = new Float64Array(n);
+    }
+    const { re, im, k0 } = this;
     for (let i = this.count - 1; i >= 0; i--) {
       const d = this.thickness[i];
       const back = i === this.count - 1;
-      if (this.porous[i] === 0) {
-        // air layer: real Zz and real tangent
-        const zz = 1 / cos;
-        let t = Math.tan(k0 * cos * d);
-        if (Math.abs(t) < TINY) t = TINY;
-        if (back) {
-          br = 0;
-          bi = -zz / t;
-        } else {
+      if (this.layers[i].kind === "air") {
+        for (let j = 0; j < n; j++) {
+          const zz = 1 / cos[j];
+          let t = Math.tan(k0 * cos[j] * d);
+          if (Math.abs(t) < TINY) t = TINY;
+          if (back) {
+            re[j] = 0;
+            im[j] = -zz / t;
+            continue;
+          }
           // zz (Zb + j zz t) / (zz − Zb.im t + j Zb.re t)
-          const nr = br;
+          const br = re[j];
+          const bi = im[j];
           const ni = bi + zz * t;
           const dr = zz - bi * t;
           const di = br * t;
-          const den = dr * dr + di * di;
-          br = (zz * (nr * dr + ni * di)) / den;
-          bi = (zz * (ni * dr - nr * di)) / den;
+          const g = zz / (dr * dr + di * di);
+          re[j] = g * (br * dr + ni * di);
+          im[j] = g * (ni * dr - br * di);
         }
         continue;
       }
@@ -94,52 +126,50 @@ export class LayeredModel {
       const zci = this.fluid[o + 1];
       const kr = this.fluid[o + 2];
       const ki = this.fluid[o + 3];
-      // q = kz/k0 = sqrt((kc/k0)² − sin²θ), the root with negative imaginary part
-      let qr = kr;
-      let qi = ki;
-      let zzr = zcr;
-      let zzi = zci;
-      if (sin2 > 0) {
-        const xr = kr * kr - ki * ki - sin2;
-        const xi = 2 * kr * ki;
-        const m = Math.sqrt(xr * xr + xi * xi);
+      const k2r = kr * kr - ki * ki;
+      const k2i = 2 * kr * ki;
+      const pr = zcr * kr - zci * ki;
+      const pi = zcr * ki + zci * kr;
+      const phase = 2 * k0 * d;
+      for (let j = 0; j < n; j++) {
+        // q = kz/k0 = sqrt((kc/k0)² − sin²θ), the root with negative imaginary part
+        const xr = k2r - sin2[j];
+        const m = Math.sqrt(xr * xr + k2i * k2i);
+        let qr: number;
+        let qi: number;
         if (xr >= 0) {
           qr = Math.sqrt(0.5 * (m + xr));
-          qi = xi / (2 * qr);
+          qi = k2i / (2 * qr);
         } else {
-          qi = (xi < 0 ? -1 : 1) * Math.sqrt(0.5 * (m - xr));
-          qr = xi / (2 * qi);
+          qi = (k2i < 0 ? -1 : 1) * Math.sqrt(0.5 * (m - xr));
+          qr = k2i / (2 * qi);
         }
         // Zz = Zc·kc/kz
-        const pr = zcr * kr - zci * ki;
-        const pi = zcr * ki + zci * kr;
-        const qq = qr * qr + qi * qi;
-        zzr = (pr * qr + pi * qi) / qq;
-        zzi = (pi * qr - pr * qi) / qq;
-      }
-      // T = tan(k0 d q), tan(a + jb) = (sin 2a + j sinh 2b) / (cos 2a + cosh 2b)
-      const a = 2 * k0 * d * qr;
-      const b = 2 * k0 * d * qi;
-      let tr: number;
-      let ti: number;
-      if (b > 40 || b < -40) {
-        tr = 0;
-        ti = b > 0 ? 1 : -1;
-      } else {
-        const e = Math.exp(b);
-        const den = Math.cos(a) + 0.5 * (e + 1 / e);
-        tr = Math.sin(a) / den;
-        ti = (0.5 * (e - 1 / e)) / den;
-      }
-      if (back) {
-        // −j Zz / T
-        const tt = tr * tr + ti * ti;
-        const ur = (zzr * tr + zzi * ti) / tt;
-        const ui = (zzi * tr - zzr * ti) / tt;
-        br = ui;
-        bi = -ur;
-      } else {
+        const g0 = 1 / (qr * qr + qi * qi);
+        const zzr = g0 * (pr * qr + pi * qi);
+        const zzi = g0 * (pi * qr - pr * qi);
+        // T = tan(k0 d q); tan(a + jb) = (sin 2a + j sinh 2b) / (cos 2a + cosh 2b)
+        const a = phase * qr;
+        const b = phase * qi;
+        let tr = 0;
+        let ti = b > 0 ? 1 : -1;
+        if (b < 40 && b > -40) {
+          const e = Math.exp(b);
+          const ie = 1 / e;
+          const g = 1 / (Math.cos(a) + 0.5 * (e + ie));
+          tr = g * Math.sin(a);
+          ti = g * 0.5 * (e - ie);
+        }
+        if (back) {
+          // −j Zz / T
+          const g = 1 / (tr * tr + ti * ti);
+          re[j] = g * (zzi * tr - zzr * ti);
+          im[j] = -g * (zzr * tr + zzi * ti);
+          continue;
+        }
         // Zz (Zb + j Zz T) / (Zz + j Zb T)
+        const br = re[j];
+        const bi = im[j];
         const ar = zzr * tr - zzi * ti;
         const ai = zzr * ti + zzi * tr;
         const cr = br * tr - bi * ti;
@@ -148,22 +178,27 @@ export class LayeredModel {
         const ni = bi + ar;
         const dr = zzr - ci;
         const di = zzi + cr;
-        const den = dr * dr + di * di;
-        const hr = (nr * dr + ni * di) / den;
-        const hi = (ni * dr - nr * di) / den;
-        br = zzr * hr - zzi * hi;
-        bi = zzr * hi + zzi * hr;
+        const g = 1 / (dr * dr + di * di);
+        const hr = g * (nr * dr + ni * di);
+        const hi = g * (ni * dr - nr * di);
+        re[j] = zzr * hr - zzi * hi;
+        im[j] = zzr * hi + zzi * hr;
       }
     }
-    this.zr = br + this.facing.zr;
-    this.zi = bi + this.facing.zi;
   }
+}
 
-  /** Normal-incidence absorption at f. */
-  normalAbsorption(f: number): number {
-    this.setFrequency(f);
-    this.impedance(1, 0);
-    const a = this.zr;
-    return (4 * a) / ((a + 1) * (a + 1) + this.zi * this.zi);
+/**
+ * Σ weight·α(θ) over the angles of q for layer impedances re, im (from offset) in series with
+ * a facing impedance fr + j fi.
+ */
+export function fieldSum(re: Float64Array, im: Float64Array, offset: number, fr: number, fi: number, q: Quadrature): number {
+  let sum = 0;
+  for (let j = 0; j < q.n; j++) {
+    const c = q.cos[j];
+    const a = (re[offset + j] + fr) * c;
+    const b = (im[offset + j] + fi) * c;
+    sum += (q.weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
   }
+  return sum;
 }

@@ -35,12 +35,20 @@ export const DB_RANGE = [0.01, 1] as const;
 const percent = (x: number) => `${(100 * x).toFixed(1)} %`;
 const hz = (f: number) => `${f.toPrecision(4)} Hz`;
 
-export function buildUpWarnings(
-  buildUp: BuildUp,
-  air: Air,
-  helmholtzHz: number,
-  peak: { f: number; atLimit: boolean } | null,
-): Warning[] {
+export function buildUpWarnings({
+  buildUp,
+  air,
+  helmholtzHz,
+  peak,
+  clampedUpToHz,
+}: {
+  buildUp: BuildUp;
+  air: Air;
+  helmholtzHz: number;
+  peak: { f: number; atLimit: boolean } | null;
+  /** highest sample frequency where a negative absorption was set to 0, or null */
+  clampedUpToHz: number | null;
+}): Warning[] {
   const out: Warning[] = [];
   const { facing, cavity, infill } = buildUp;
   const eps = facingOpenArea(facing);
@@ -54,7 +62,7 @@ export function buildUpWarnings(
   if (helmholtzHz > root * (1 + LUMPED_OVERESTIMATE_LIMIT)) {
     out.push({
       code: "lumped-overestimate",
-      message: `helmholtzHz ${hz(helmholtzHz)} is ${percent(helmholtzHz / root - 1)} above the exact cavity root ${hz(root)}: the lumped estimate overestimates for large open area or deep cavity; use peakHz`,
+      message: `helmholtzHz ${hz(helmholtzHz)} is ${percent(helmholtzHz / root - 1)} above the exact cavity root ${hz(root)}: the lumped estimate assumes a cavity much shallower than the wavelength (here kD = ${((2 * Math.PI * helmholtzHz * cavity.depth) / air.c).toFixed(2)} at helmholtzHz) and overestimates for large open area or deep cavity; use peakHz`,
     });
   }
   if (facing.kind === "round-holes" && eps > FOK_OPEN_AREA_LIMIT) {
@@ -92,6 +100,12 @@ export function buildUpWarnings(
         message: `flow resistivity ${infill.flowResistivity} Pa·s/m²: ${name} is within its data range 0.01 < ρ0f/σ < 1 ${within}; values outside are extrapolated`,
       });
     }
+  }
+  if (clampedUpToHz !== null) {
+    out.push({
+      code: "negative-absorption",
+      message: `the porous model gives a non-physical negative absorption (negative real part of the impedance) up to ${hz(clampedUpToHz)}, far below its data range; it is set to 0 there. Miki's model avoids this`,
+    });
   }
   if (peak?.atLimit) {
     out.push({

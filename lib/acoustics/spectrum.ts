@@ -1,0 +1,61 @@
+/**
+ * Absorption spectra of a build-up at normal and field incidence. A partitioned cavity is
+ * locally reacting: its normal-incidence impedance serves every angle, computed once per
+ * frequency. An open cavity reacts extendedly: every layer is evaluated at each angle.
+ */
+import { airProperties } from "./air";
+import { type BuildUp, cavityLayers } from "./build-up";
+import { DEFAULT_ANGLES, FIELD_INCIDENCE_LIMIT_DEG, type Quadrature, fieldQuadrature, locallyReactingField, obliqueAbsorption } from "./incidence";
+import { LayeredModel } from "./layered-model";
+
+export function buildUpModel(buildUp: BuildUp): LayeredModel {
+  return new LayeredModel(buildUp.facing, cavityLayers(buildUp.cavity, buildUp.infill), airProperties(buildUp.air));
+}
+
+export function fillSpectrum(
+  model: LayeredModel,
+  locallyReacting: boolean,
+  frequencies: ArrayLike<number>,
+  q: Quadrature,
+  normal: Float64Array,
+  diffuse: Float64Array,
+): void {
+  for (let k = 0; k < frequencies.length; k++) {
+    model.setFrequency(frequencies[k]);
+    model.impedance();
+    normal[k] = obliqueAbsorption(model.zr, model.zi, 1);
+    diffuse[k] = locallyReacting ? locallyReactingField(model.zr, model.zi, q) : model.fieldAbsorption(q);
+  }
+}
+
+/**
+ * Delany & Bazley's model, extrapolated far below its range (ρ0f/σ < 0.01), gives a surface
+ * impedance with negative real part and so a negative absorption (the defect Miki 1990 set out
+ * to remove). Such values are set to 0; the index of the highest frequency so treated is
+ * returned (−1 if none) so that the caller can warn.
+ */
+export function clampNegative(values: Float64Array): number {
+  let last = -1;
+  for (let k = 0; k < values.length; k++) {
+    if (values[k] < 0) {
+      values[k] = 0;
+      last = k;
+    }
+  }
+  return last;
+}
+
+/** Absorption of a build-up at arbitrary frequencies (for curves). */
+export function absorptionSpectrum(
+  buildUp: BuildUp,
+  frequencies: ArrayLike<number>,
+  options: { angles?: number; maxAngleDeg?: number } = {},
+): { normal: Float64Array; diffuse: Float64Array } {
+  const q = fieldQuadrature(options.angles ?? DEFAULT_ANGLES, options.maxAngleDeg ?? FIELD_INCIDENCE_LIMIT_DEG);
+  const normal = new Float64Array(frequencies.length);
+  const diffuse = new Float64Array(frequencies.length);
+  fillSpectrum(buildUpModel(buildUp), buildUp.cavity.partitioned, frequencies, q, normal, diffuse);
+  clampNegative(normal);
+  clampNegative(diffuse);
+  return { normal, diffuse };
+}
