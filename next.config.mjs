@@ -4,6 +4,9 @@ const nextConfig = {
   images: { unoptimized: true },
   poweredByHeader: false,
   typedRoutes: false,
+  // Types are checked once for the whole tree (app, lib, tests) by `npm run typecheck`,
+  // which `npm test` runs first; the build does not repeat it.
+  typescript: { ignoreBuildErrors: true },
 };
 
 export default nextConfig;

@@ -7,7 +7,8 @@ import { z } from "zod";
 const envSchema = z.object({
   CAVITAS_DATA_DIR: z.string().min(1).default(".data"),
   CAVITAS_DATABASE: z.string().min(1).optional(),
-  CAVITAS_APP_URL: z.url().default("http://localhost:3000"),
+  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  CAVITAS_APP_URL: z.url().optional(),
   CAVITAS_SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   CAVITAS_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   CAVITAS_MAIL_HTTP_PORT: z.coerce.number().int().min(1).max(65535).default(1080),
@@ -17,6 +18,7 @@ const envSchema = z.object({
 });
 
 export type Env = {
+  port: number;
   dataDir: string;
   databasePath: string;
   appUrl: string;
@@ -43,7 +45,8 @@ export function env(): Env {
   cached = {
     dataDir,
     databasePath: path.resolve(/*turbopackIgnore: true*/ e.CAVITAS_DATABASE ?? path.join(dataDir, "cavitas.sqlite")),
-    appUrl: e.CAVITAS_APP_URL.replace(/\/$/, ""),
+    port: e.PORT,
+    appUrl: (e.CAVITAS_APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, ""),
     smtpHost: e.CAVITAS_SMTP_HOST,
     smtpPort: e.CAVITAS_SMTP_PORT,
     mailHttpPort: e.CAVITAS_MAIL_HTTP_PORT,

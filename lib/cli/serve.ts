@@ -1,56 +1,33 @@
-import fs from "node:fs";
-import path from "node:path";
 import { spawn, spawnSync } from "node:child_process";
 import { getDb, closeDb } from "@/db/client";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "@/db/seed";
 import { env } from "@/lib/env";
 import { startMailCatcher } from "@/lib/mail/catcher";
+import { buildIsCurrent, nextBin } from "./build-state";
 
 // npm run demo | npm run dev: migrate, seed the fictional demo scenario, start the local mail
 // catcher, then the Next.js server (a production build for the demo, the dev server for dev).
 
 const mode = process.argv[2] === "dev" ? "dev" : "demo";
-const port = Number(process.env.PORT ?? 3000);
-const nextBin = path.join(process.cwd(), "node_modules", "next", "dist", "bin", "next");
-
-function newestSource(dir: string): number {
-  let newest = 0;
-  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-    const full = path.join(dir, entry.name);
-    if (entry.isDirectory()) newest = Math.max(newest, newestSource(full));
-    else newest = Math.max(newest, fs.statSync(full).mtimeMs);
-  }
-  return newest;
-}
-
-function buildIsCurrent(): boolean {
-  const buildId = path.join(process.cwd(), ".next", "BUILD_ID");
-  if (!fs.existsSync(buildId)) return false;
-  const built = fs.statSync(buildId).mtimeMs;
-  const sources = ["app", "components", "lib", "db", "public", "fonts"].filter((d) => fs.existsSync(d));
-  return sources.every((d) => newestSource(d) < built);
-}
-
 async function main() {
-  process.env.CAVITAS_APP_URL ??= `http://localhost:${port}`;
-  process.env.NEXT_TELEMETRY_DISABLED ??= "1";
   const e = env();
+  const childEnv = { ...process.env, CAVITAS_APP_URL: e.appUrl, NEXT_TELEMETRY_DISABLED: "1" };
   const seeded = await seedDemo(getDb());
   closeDb();
   const catcher = await startMailCatcher({ smtpPort: e.smtpPort, httpPort: e.mailHttpPort });
 
   if (mode === "demo" && !buildIsCurrent()) {
     console.log("Building Cavitas (first run, or the sources changed)…");
-    const built = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env: process.env });
+    const built = spawnSync(process.execPath, [nextBin(), "build"], { stdio: "inherit", env: childEnv });
     if (built.status !== 0) {
       await catcher.close();
       process.exit(built.status ?? 1);
     }
   }
 
-  const server = spawn(process.execPath, [nextBin, mode === "dev" ? "dev" : "start", "-p", String(port)], {
+  const server = spawn(process.execPath, [nextBin(), mode === "dev" ? "dev" : "start", "-p", String(e.port)], {
     stdio: "inherit",
-    env: process.env,
+    env: childEnv,
   });
 
   console.log(
