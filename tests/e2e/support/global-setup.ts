@@ -6,6 +6,7 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import type { TestProject } from "vitest/node";
 import { buildIsCurrent, nextBin } from "@/lib/cli/build-state";
 import { startMailCatcher, type MailCatcher } from "@/lib/mail/catcher";
+import { ensureChromium } from "./ensure-chromium";
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -47,9 +48,7 @@ let dataDir = "";
 
 export async function setup(project: TestProject) {
   const root = process.cwd();
-  if (!fs.existsSync("/usr/bin/chromium") && !process.env.CAVITAS_CHROMIUM) {
-    throw new Error("Debian's chromium is needed for the end-to-end tests: apt-get install -y chromium");
-  }
+  ensureChromium();
   if (!buildIsCurrent(root)) {
     const built = spawnSync(process.execPath, [nextBin(root), "build"], {
       stdio: "inherit",
