@@ -1,4 +1,4 @@
-import { evaluate, isUnit, type Unit } from "mathjs";
+import { fraction as mathFraction, isUnit, number, unit, type Unit } from "mathjs";
 
 // Lengths are stored in metres; people type and read them in their own units.
 // Parsing goes through mathjs units, so "19 mm", "3/4 in", "12 ft 6 in", "2' 6\"" all work.
@@ -14,23 +14,30 @@ export function parseLength(raw: string): ParseResult {
   if (!ALLOWED.test(text)) return { ok: false, message: `"${raw}" is not a length. Use a number and a unit, for example 2.4 m or 8 ft.` };
   if (/\d,\d/.test(text)) return { ok: false, message: `"${raw}" is ambiguous: write decimals with a point, for example 2.4 m.` };
   if (/^[\d.\s/]+$/.test(text)) return { ok: false, message: `"${raw}" has no unit. Add one, for example ${text} mm or ${text} in.` };
-  const expr = text
-    .replace(/(\d)\s*'/g, "$1 ft ")
-    .replace(/(\d)\s*"/g, "$1 in ")
-    // "12 ft 6 in" and "2 1/2 in": consecutive terms add up (mathjs would multiply them).
-    .replace(/([a-zA-Z])\s+(?=\d)/g, "$1 + ")
-    .replace(/(\d)\s+(?=\d+\s*\/\s*\d)/g, "$1 + ")
-    .trim();
-  let value: unknown;
-  try {
-    value = evaluate(expr);
-  } catch {
+  const normalised = text.replace(/(\d)\s*'/g, "$1 ft ").replace(/(\d)\s*"/g, "$1 in ").trim();
+  // A length is one or more terms, each a number (decimal, fraction or mixed "10 1/2") and a
+  // unit; "12 ft 6 in" adds its terms (mathjs alone would multiply them into an area).
+  const TERM = /(\d+(?:\.\d+)?(?:\s+\d+\s*\/\s*\d+)?|\d+\s*\/\s*\d+|\.\d+)\s*([a-zA-Z]+)\s*(?:\+\s*)?/gy;
+  let total = 0;
+  let consumed = 0;
+  for (const m of normalised.matchAll(TERM)) {
+    if (m.index !== consumed) break;
+    consumed = m.index + m[0].length;
+    let term: unknown;
+    try {
+      term = unit(numberOf(m[1]), m[2]);
+    } catch {
+      return { ok: false, message: `"${raw}" uses a unit Cavitas does not know ("${m[2]}"). Use mm, cm, m, in or ft.` };
+    }
+    if (!isUnit(term) || !(term as Unit).equalBase(unit(1, "m"))) {
+      return { ok: false, message: `"${raw}" is not a length. Use mm, cm, m, in or ft.` };
+    }
+    total += (term as Unit).toNumber("m");
+  }
+  if (consumed === 0 || consumed !== normalised.length) {
     return { ok: false, message: `"${raw}" is not a length Cavitas understands. Try 19 mm, 0.6 m, 3/4 in or 12 ft 6 in.` };
   }
-  if (!isUnit(value) || !(value as Unit).equalBase(evaluate("1 m") as Unit)) {
-    return { ok: false, message: `"${raw}" is not a length. Use mm, cm, m, in or ft.` };
-  }
-  const metres = (value as Unit).toNumber("m");
+  const metres = total;
   if (!Number.isFinite(metres)) return { ok: false, message: `"${raw}" is not a finite length.` };
   return { ok: true, metres };
 }
@@ -59,6 +66,12 @@ export function formatArea(m2: number, pref: UnitPreference): string {
 
 export function formatVolume(m3: number, pref: UnitPreference): string {
   return pref === "metric" ? `${trim(m3, 0)} m³` : `${trim(m3 / 0.3048 ** 3, 0)} ft³`;
+}
+
+// "10 1/2", "3/4", "2.5" → a plain number (mathjs fractions keep "1/3" exact until here).
+function numberOf(text: string): number {
+  const parts = text.trim().split(/\s+/);
+  return parts.reduce((sum, p) => sum + (p.includes("/") ? number(mathFraction(p.replace(/\s/g, ""))) : Number(p)), 0);
 }
 
 function fraction(eighths: number): string {
