@@ -16,8 +16,8 @@ export interface AtmosphereInput {
   pressure?: number;
 }
 
-/** Attenuation coefficient α in dB/m at frequency f (Hz). */
-export function airAttenuationDbPerM(f: number, atmosphere: AtmosphereInput): number {
+/** Molar concentration of water vapour h (%) and the relaxation frequencies of O2 and N2 (Hz). */
+export function atmosphereRelaxation(atmosphere: AtmosphereInput): { h: number; frO: number; frN: number } {
   const t = atmosphere.temperature + KELVIN;
   const pa = (atmosphere.pressure ?? STANDARD_PRESSURE) / STANDARD_PRESSURE;
   const psat = 10 ** (-6.8346 * (T01 / t) ** 1.261 + 4.6151);
@@ -25,15 +25,20 @@ export function airAttenuationDbPerM(f: number, atmosphere: AtmosphereInput): nu
   const tr = t / T0;
   const frO = pa * (24 + (4.04e4 * h * (0.02 + h)) / (0.391 + h));
   const frN = pa * tr ** -0.5 * (9 + 280 * h * Math.exp(-4.17 * (tr ** (-1 / 3) - 1)));
-  return (
-    8.686 *
-    f *
-    f *
-    (1.84e-11 / pa * tr ** 0.5 +
-      tr ** -2.5 *
-        ((0.01275 * Math.exp(-2239.1 / t)) / (frO + (f * f) / frO) +
-          (0.1068 * Math.exp(-3352 / t)) / (frN + (f * f) / frN)))
-  );
+  return { h, frO, frN };
+}
+
+/** Attenuation coefficient α in dB/m at frequency f (Hz). */
+export function airAttenuationDbPerM(f: number, atmosphere: AtmosphereInput): number {
+  const t = atmosphere.temperature + KELVIN;
+  const pa = (atmosphere.pressure ?? STANDARD_PRESSURE) / STANDARD_PRESSURE;
+  const tr = t / T0;
+  const { frO, frN } = atmosphereRelaxation(atmosphere);
+  const f2 = f * f;
+  const classical = (1.84e-11 / pa) * tr ** 0.5;
+  const oxygen = (0.01275 * Math.exp(-2239.1 / t)) / (frO + f2 / frO);
+  const nitrogen = (0.1068 * Math.exp(-3352 / t)) / (frN + f2 / frN);
+  return 8.686 * f2 * (classical + tr ** -2.5 * (oxygen + nitrogen));
 }
 
 /** In dB/km, as the air command prints it. */
