@@ -28,18 +28,22 @@ export function fillSpectrum(
   }
 }
 
+/** Below this a negative value is rounding, not the model. */
+const ROUNDING = -1e-9;
+
 /**
- * Delany & Bazley's model, extrapolated far below its range (ρ0f/σ < 0.01), gives a surface
- * impedance with negative real part and so a negative absorption (the defect Miki 1990 set out
- * to remove). Such values are set to 0; the index of the highest frequency so treated is
- * returned (−1 if none) so that the caller can warn.
+ * Delany & Bazley's model can give a thin rigidly backed layer an impedance with negative real
+ * part at low frequencies, even inside its data range, and so a negative absorption (the defect
+ * Miki 1990 set out to remove); Miki's model does so only far below its range (f/σ ≪ 0.01).
+ * Negative values are set to 0; the index of the highest frequency where the value was more
+ * than rounding is returned (−1 if none) so that the caller can warn.
  */
 export function clampNegative(values: Float64Array): number {
   let last = -1;
   for (let k = 0; k < values.length; k++) {
     if (values[k] < 0) {
+      if (values[k] < ROUNDING) last = k;
       values[k] = 0;
-      last = k;
     }
   }
   return last;

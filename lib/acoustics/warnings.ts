@@ -104,7 +104,7 @@ export function buildUpWarnings({
   if (clampedUpToHz !== null) {
     out.push({
       code: "negative-absorption",
-      message: `the porous model gives a non-physical negative absorption (negative real part of the impedance) up to ${hz(clampedUpToHz)}, far below its data range; it is set to 0 there. Miki's model avoids this`,
+      message: `the porous model gives a non-physical negative absorption (an impedance with negative real part) up to ${hz(clampedUpToHz)}; it is set to 0 there. Delany–Bazley does this for thin layers at low frequencies; Miki's model avoids it inside its data range`,
     });
   }
   if (peak?.atLimit) {
