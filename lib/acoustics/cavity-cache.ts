@@ -8,8 +8,9 @@ import type { Air } from "./air";
 import type { Cavity, Infill } from "./build-up";
 import { cavityLayers } from "./build-up";
 import type { FacingImpedance } from "./facing-impedance";
-import { type Quadrature, locallyReactingField, obliqueAbsorption } from "./incidence";
+import { locallyReactingField, obliqueAbsorption } from "./incidence";
 import { type LayeredModel, fieldSum } from "./layered-model";
+import type { SpectrumGrid } from "./spectrum";
 
 export interface CavityTable {
   normalRe: Float64Array;
@@ -19,9 +20,10 @@ export interface CavityTable {
   fieldIm: Float64Array;
 }
 
-export function cavityTable(model: LayeredModel, locallyReacting: boolean, frequencies: ArrayLike<number>, q: Quadrature): CavityTable {
+export function cavityTable(model: LayeredModel, grid: SpectrumGrid): CavityTable {
+  const { frequencies, q } = grid;
   const nf = frequencies.length;
-  const size = locallyReacting ? 0 : nf * q.n;
+  const size = grid.locallyReacting ? 0 : nf * q.n;
   const table: CavityTable = {
     normalRe: new Float64Array(nf),
     normalIm: new Float64Array(nf),
@@ -33,27 +35,20 @@ export function cavityTable(model: LayeredModel, locallyReacting: boolean, frequ
     model.impedance();
     table.normalRe[k] = model.zr - model.facing.zr;
     table.normalIm[k] = model.zi - model.facing.zi;
-    if (!locallyReacting) model.cavityImpedances(q, table.fieldRe, table.fieldIm, k * q.n);
+    if (!grid.locallyReacting) model.cavityImpedances(q, table.fieldRe, table.fieldIm, k * q.n);
   }
   return table;
 }
 
 /** Normal and field-incidence absorption from a cavity table and a facing. */
-export function fillFromTable(
-  facing: FacingImpedance,
-  table: CavityTable,
-  locallyReacting: boolean,
-  frequencies: ArrayLike<number>,
-  q: Quadrature,
-  normal: Float64Array,
-  diffuse: Float64Array,
-): void {
+export function fillFromTable(facing: FacingImpedance, table: CavityTable, grid: SpectrumGrid): void {
+  const { frequencies, q, normal, diffuse } = grid;
   for (let k = 0; k < frequencies.length; k++) {
     facing.at(frequencies[k]);
     const zr = table.normalRe[k] + facing.zr;
     const zi = table.normalIm[k] + facing.zi;
     normal[k] = obliqueAbsorption(zr, zi, 1);
-    diffuse[k] = locallyReacting
+    diffuse[k] = grid.locallyReacting
       ? locallyReactingField(zr, zi, q)
       : fieldSum(table.fieldRe, table.fieldIm, k * q.n, facing.zr, facing.zi, q);
   }
@@ -64,14 +59,8 @@ export class CavityCache {
 
   constructor(private readonly limit = 64) {}
 
-  table(
-    cavity: Cavity,
-    infill: Infill | null,
-    air: Air,
-    frequencies: ArrayLike<number>,
-    q: Quadrature,
-    build: () => CavityTable,
-  ): CavityTable {
+  table(cavity: Cavity, infill: Infill | null, air: Air, grid: SpectrumGrid, build: () => CavityTable): CavityTable {
+    const { frequencies, q } = grid;
     const key = JSON.stringify([cavityLayers(cavity, infill), cavity.partitioned, air.c, air.rho, frequencies.length, frequencies[0], q.n, q.maxAngleDeg]);
     const hit = this.tables.get(key);
     if (hit) return hit;

@@ -11,7 +11,7 @@ import { lumpedPanelHz } from "./helmholtz";
 import { DEFAULT_ANGLES, FIELD_INCIDENCE_LIMIT_DEG, fieldQuadrature } from "./incidence";
 import { LayeredModel } from "./layered-model";
 import { findPeak } from "./peak";
-import { clampNegative, fillSpectrum } from "./spectrum";
+import { clampNegative, fillSpectrum, spectrumGrid } from "./spectrum";
 import { type Warning, buildUpWarnings } from "./warnings";
 
 export interface EvaluateOptions {
@@ -52,16 +52,14 @@ export function evaluateBuildUp(buildUp: BuildUp, options: EvaluateOptions = {})
   const freqs = thirdOctaveSamples(n);
   const q = fieldQuadrature(options.angles ?? DEFAULT_ANGLES, options.maxAngleDeg ?? FIELD_INCIDENCE_LIMIT_DEG);
   const model = new LayeredModel(buildUp.facing, cavityLayers(buildUp.cavity, buildUp.infill), air);
-  const normal = new Float64Array(freqs.length);
-  const diffuse = new Float64Array(freqs.length);
-  const local = buildUp.cavity.partitioned;
+  const grid = spectrumGrid(freqs, q, buildUp.cavity.partitioned);
   if (options.cavityCache) {
-    const build = () => cavityTable(model, local, freqs, q);
-    const table = options.cavityCache.table(buildUp.cavity, buildUp.infill, air, freqs, q, build);
-    fillFromTable(model.facing, table, local, freqs, q, normal, diffuse);
+    const table = options.cavityCache.table(buildUp.cavity, buildUp.infill, air, grid, () => cavityTable(model, grid));
+    fillFromTable(model.facing, table, grid);
   } else {
-    fillSpectrum(model, local, freqs, q, normal, diffuse);
+    fillSpectrum(model, grid);
   }
+  const { normal, diffuse } = grid;
   const clamped = Math.max(clampNegative(normal), clampNegative(diffuse));
 
   const normalBands = bandMeans(normal, n);

@@ -7,6 +7,8 @@
  */
 import { speedOfSound } from "./air";
 import { type AtmosphereInput, airPowerAttenuation } from "./air-absorption";
+
+export type { AtmosphereInput } from "./air-absorption";
 import { OCTAVES } from "./bands";
 
 export const DECAY_CONSTANT = 24 * Math.LN10;

@@ -12,19 +12,26 @@ export function buildUpModel(buildUp: BuildUp): LayeredModel {
   return new LayeredModel(buildUp.facing, cavityLayers(buildUp.cavity, buildUp.infill), airProperties(buildUp.air));
 }
 
-export function fillSpectrum(
-  model: LayeredModel,
-  locallyReacting: boolean,
-  frequencies: ArrayLike<number>,
-  q: Quadrature,
-  normal: Float64Array,
-  diffuse: Float64Array,
-): void {
+/** Where a spectrum is computed and where it goes. */
+export interface SpectrumGrid {
+  frequencies: ArrayLike<number>;
+  q: Quadrature;
+  locallyReacting: boolean;
+  normal: Float64Array;
+  diffuse: Float64Array;
+}
+
+export function spectrumGrid(frequencies: ArrayLike<number>, q: Quadrature, locallyReacting: boolean): SpectrumGrid {
+  return { frequencies, q, locallyReacting, normal: new Float64Array(frequencies.length), diffuse: new Float64Array(frequencies.length) };
+}
+
+export function fillSpectrum(model: LayeredModel, grid: SpectrumGrid): void {
+  const { frequencies, q, normal, diffuse } = grid;
   for (let k = 0; k < frequencies.length; k++) {
     model.setFrequency(frequencies[k]);
     model.impedance();
     normal[k] = obliqueAbsorption(model.zr, model.zi, 1);
-    diffuse[k] = locallyReacting ? locallyReactingField(model.zr, model.zi, q) : model.fieldAbsorption(q);
+    diffuse[k] = grid.locallyReacting ? locallyReactingField(model.zr, model.zi, q) : model.fieldAbsorption(q);
   }
 }
 
@@ -56,10 +63,9 @@ export function absorptionSpectrum(
   options: { angles?: number; maxAngleDeg?: number } = {},
 ): { normal: Float64Array; diffuse: Float64Array } {
   const q = fieldQuadrature(options.angles ?? DEFAULT_ANGLES, options.maxAngleDeg ?? FIELD_INCIDENCE_LIMIT_DEG);
-  const normal = new Float64Array(frequencies.length);
-  const diffuse = new Float64Array(frequencies.length);
-  fillSpectrum(buildUpModel(buildUp), buildUp.cavity.partitioned, frequencies, q, normal, diffuse);
-  clampNegative(normal);
-  clampNegative(diffuse);
-  return { normal, diffuse };
+  const grid = spectrumGrid(frequencies, q, buildUp.cavity.partitioned);
+  fillSpectrum(buildUpModel(buildUp), grid);
+  clampNegative(grid.normal);
+  clampNegative(grid.diffuse);
+  return { normal: grid.normal, diffuse: grid.diffuse };
 }

@@ -3,6 +3,7 @@ import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
+import { RATING_EXAMPLES, ratingsOf, thirdsOf } from "../unit/acoustics/fixtures";
 
 // The calculation contract on the command line (SPEC.md section 6): one spawned process per
 // case, run concurrently. Results on stdout with exit 0; refusals as JSON on stderr, exit 2.
@@ -64,11 +65,10 @@ describe.concurrent("npm run calc", { timeout: 90_000 }, () => {
   });
 
   it("rate - (standard input): R2 of REFERENCES.md 7.3 [COMPUTED]", async () => {
-    const R2 = [0.3, 0.45, 0.6, 0.75, 0.85, 0.9, 0.88, 0.8, 0.7, 0.6, 0.52, 0.45, 0.4, 0.36, 0.33, 0.3, 0.28, 0.26];
-    const bands = [100, 125, 160, 200, 250, 315, 400, 500, 630, 800, 1000, 1250, 1600, 2000, 2500, 3150, 4000, 5000];
-    const result = await run(["rate", "-"], JSON.stringify({ thirdOctaves: Object.fromEntries(bands.map((b, i) => [b, R2[i]])) }));
+    const R2 = RATING_EXAMPLES[1];
+    const result = await run(["rate", "-"], JSON.stringify({ thirdOctaves: thirdsOf(R2.third) }));
     expect(result.code).toBe(0);
-    expect(JSON.parse(result.stdout)).toEqual({ alphaP: { 250: 0.85, 500: 0.8, 1000: 0.5, 2000: 0.35, 4000: 0.3 }, alphaW: 0.4, shape: "LM", class: "D", nrc: 0.65, saa: 0.63 });
+    expect(JSON.parse(result.stdout)).toEqual(ratingsOf(R2));
   });
 
   it("resonator FILE: H2 of REFERENCES.md 2 (120.45 Hz) [COMPUTED]", async () => {

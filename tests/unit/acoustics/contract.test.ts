@@ -8,6 +8,7 @@ import {
   runResonator,
   runReverb,
 } from "@/lib/acoustics/contract";
+import { RATING_EXAMPLES, ratingsOf, thirdsOf } from "./fixtures";
 
 // SPEC.md section 6: one schema per input, errors name the field as a dotted path.
 const evaluateInput = () => ({
@@ -118,19 +119,11 @@ describe("warnings where a model leaves its validity", () => {
 });
 
 describe("rate, resonator, reverb, air", () => {
-  const bands = [100, 125, 160, 200, 250, 315, 400, 500, 630, 800, 1000, 1250, 1600, 2000, 2500, 3150, 4000, 5000];
-  const R2 = [0.3, 0.45, 0.6, 0.75, 0.85, 0.9, 0.88, 0.8, 0.7, 0.6, 0.52, 0.45, 0.4, 0.36, 0.33, 0.3, 0.28, 0.26];
-  const rateInput = { thirdOctaves: Object.fromEntries(bands.map((b, i) => [String(b), R2[i]])) };
+  const R2 = RATING_EXAMPLES[1];
+  const rateInput = { thirdOctaves: thirdsOf(R2.third) };
 
   it("rate: R2 of REFERENCES.md 7.3 [COMPUTED]", () => {
-    expect(runRate(valueOf("rate", rateInput))).toEqual({
-      alphaP: { 250: 0.85, 500: 0.8, 1000: 0.5, 2000: 0.35, 4000: 0.3 },
-      alphaW: 0.4,
-      shape: "LM",
-      class: "D",
-      nrc: 0.65,
-      saa: 0.63,
-    });
+    expect(runRate(valueOf("rate", rateInput))).toEqual(ratingsOf(R2));
   });
   it("rate refuses a missing band and a negative coefficient", () => {
     const { 125: _, ...missing } = rateInput.thirdOctaves;

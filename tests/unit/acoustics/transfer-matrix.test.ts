@@ -6,7 +6,7 @@ import { CavityCache } from "@/lib/acoustics/cavity-cache";
 import { evaluateBuildUp } from "@/lib/acoustics/evaluate";
 import { fieldQuadrature } from "@/lib/acoustics/incidence";
 import { LayeredModel } from "@/lib/acoustics/layered-model";
-import { fillSpectrum } from "@/lib/acoustics/spectrum";
+import { fillSpectrum, spectrumGrid } from "@/lib/acoustics/spectrum";
 import { baselineEvaluate } from "@/tests/bench/baseline-mathjs";
 import { benchCases } from "@/tests/bench/cases";
 import { NOMINAL } from "./helpers";
@@ -36,10 +36,9 @@ describe("perforated plate + porous + air on rigid backing (T6) [COMPUTED]", () 
     air,
   );
   const run = (local: boolean, maxAngleDeg: number, angles: number) => {
-    const normal = new Float64Array(NOMINAL.length);
-    const diffuse = new Float64Array(NOMINAL.length);
-    fillSpectrum(model, local, NOMINAL, fieldQuadrature(angles, maxAngleDeg), normal, diffuse);
-    return { normal, diffuse };
+    const grid = spectrumGrid(NOMINAL, fieldQuadrature(angles, maxAngleDeg), local);
+    fillSpectrum(model, grid);
+    return grid;
   };
   const close = (actual: Float64Array, expected: number[], tol: number) =>
     expected.forEach((v, i) => expect(Math.abs(actual[i] - v)).toBeLessThan(tol));
