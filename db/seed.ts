@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { hashPassword } from "better-auth/crypto";
 import type { Db } from "./client";
-import { account, firm, membership, project, room, user, type ProjectRole, type RoomUse } from "./schema";
+import { account, buildUp, firm, membership, project, room, user, type ProjectRole, type RoomUse } from "./schema";
 
 // The demo scenario. Everything here is FICTIONAL: the firms, the people, the arts centre
 // and its rooms are invented for the demo and resemble no real organisation or person.
@@ -50,6 +50,44 @@ const ARTS_ROOMS: { name: string; use: RoomUse; length: number; width: number; h
 
 const LIBRARY_ROOMS: typeof ARTS_ROOMS = [{ name: "Reading room", use: "teaching", length: 16, width: 8, height: 3.4 }];
 
+// Two tuned build-ups for the arts centre (invented products; the numbers are the engine's).
+const ARTS_BUILD_UPS = [
+  {
+    name: "Bass panel, rehearsal room",
+    spec: {
+      facing: { kind: "round-holes", thickness: 0.016, holeDiameter: 0.008, pitch: 0.04, grid: "square" },
+      cavity: { depth: 0.2, partitioned: true },
+      infill: { thickness: 0.05, flowResistivity: 10000, position: "behind-facing", model: "miki" },
+      air: { temperature: 20, pressure: 101325 },
+    },
+    moduleWidth: 0.6,
+    moduleHeight: 1.2,
+    borderX: 0.04,
+    borderY: 0.04,
+    facingMaterial: "16 mm perforated MDF, lacquered (demo product)",
+    fireStandard: "EN 13501-1" as const,
+    fireClass: "B-s2,d0",
+    notes: "Tuned to the 125 Hz octave, where the rehearsal room booms.",
+  },
+  {
+    name: "Slotted speech panel, lecture room",
+    spec: {
+      facing: { kind: "slots", thickness: 0.016, slotWidth: 0.004, slotPitch: 0.032 },
+      cavity: { depth: 0.05, partitioned: true },
+      infill: { thickness: 0.04, flowResistivity: 12000, position: "behind-facing", model: "miki" },
+      air: { temperature: 20, pressure: 101325 },
+    },
+    moduleWidth: 0.6,
+    moduleHeight: 2.4,
+    borderX: 0.03,
+    borderY: 0.05,
+    facingMaterial: "16 mm slotted timber veneer board (demo product)",
+    fireStandard: "none" as const,
+    fireClass: "",
+    notes: "Mid-frequency absorber for the lecture room walls.",
+  },
+];
+
 export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   if (db.select().from(firm).where(eq(firm.id, DEMO_FIRM_ID)).get()) return { created: false };
   const passwordHash = await hashPassword(DEMO_PASSWORD);
@@ -82,6 +120,9 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         .returning()
         .get();
       for (const [key, role] of spec.members) tx.insert(membership).values({ projectId: p.id, userId: ids[key], role }).run();
+      if (spec === ARTS_CENTRE) {
+        for (const b of ARTS_BUILD_UPS) tx.insert(buildUp).values({ projectId: p.id, ...b, spec: JSON.stringify(b.spec) }).run();
+      }
       for (const r of rooms) {
         tx.insert(room)
           .values({ projectId: p.id, ...r, volume: r.length * r.width * r.height, temperature: 20, humidity: 50 })

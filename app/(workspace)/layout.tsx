@@ -10,7 +10,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   return (
     <>
       <TopBar me={getMe(actor)} />
-      <main className="mx-auto max-w-6xl px-6 py-10">{children}</main>
+      <main className="mx-auto max-w-[1320px] px-6 py-10">{children}</main>
     </>
   );
 }

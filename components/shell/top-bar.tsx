@@ -6,7 +6,7 @@ import { SignOutButton } from "./sign-out-button";
 export function TopBar({ me }: { me: Me }) {
   return (
     <header className="border-b border-ink/20 bg-paper/90 backdrop-blur">
-      <div className="mx-auto flex max-w-6xl items-center justify-between gap-6 px-6 py-3">
+      <div className="mx-auto flex max-w-[1320px] items-center justify-between gap-6 px-6 py-3">
         <div className="flex items-center gap-8">
           <Brand />
           <nav className="flex items-center gap-5 text-sm" aria-label="Main">

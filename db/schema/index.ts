@@ -5,3 +5,7 @@ export * from "./invitation";
 export * from "./room";
 export * from "./notification";
 export * from "./audit";
+export * from "./attachment";
+export * from "./material";
+export * from "./surface";
+export * from "./build-up";

@@ -1,4 +1,4 @@
-import { real, sqliteTable, text, index } from "drizzle-orm/sqlite-core";
+import { integer, real, sqliteTable, text, index } from "drizzle-orm/sqlite-core";
 import { createdAt, id, updatedAt } from "./columns";
 import { project } from "./project";
 
@@ -20,8 +20,16 @@ export const room = sqliteTable(
     width: real("width"),
     height: real("height"),
     volume: real("volume"),
+    // "shoebox": the six surfaces follow length × width × height; "free": a volume and a
+    // surface list entered by hand.
+    shape: text("shape", { enum: ["shoebox", "free"] }).notNull().default("shoebox"),
     temperature: real("temperature").notNull().default(20),
     humidity: real("humidity").notNull().default(50),
+    pressure: real("pressure").notNull().default(101325),
+    // The target spec as JSON (lib/rooms/targets.ts schema); null = the default for the use.
+    target: text("target"),
+    // Optimistic concurrency: every save names the version it started from.
+    version: integer("version").notNull().default(1),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

@@ -4,4 +4,7 @@ export const keys = {
   projects: ["projects"] as const,
   project: (id: string) => ["projects", id] as const,
   firm: ["firm"] as const,
+  buildUps: (projectId: string) => ["projects", projectId, "build-ups"] as const,
+  rooms: (projectId: string) => ["projects", projectId, "rooms"] as const,
+  room: (projectId: string, roomId: string) => ["projects", projectId, "rooms", roomId] as const,
 };

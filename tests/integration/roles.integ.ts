@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { useTestEnvironment } from "../support/test-env";
-import { addMember, makeFirm, makeProject, makeUser, uniqueEmail } from "../support/factories";
+import { addMember, makeAttachment, makeBuildUp, makeFirm, makeProject, makeUser, SPEC, TINY_PDF, uniqueEmail } from "../support/factories";
 import { call, signIn } from "../support/http";
 import { roleMay, type ProjectAction } from "@/lib/permissions";
 import { PROJECT_ROLES, type ProjectRole } from "@/lib/roles";
@@ -55,9 +55,9 @@ async function freshInvitation(): Promise<{ id: string; token: string }> {
 type Endpoint = {
   key: string; // "METHOD /api/v1/..." as the file system names it
   load: () => Promise<Record<string, any>>;
-  method: "GET" | "POST" | "PATCH" | "DELETE";
+  method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
   writes: boolean;
-  prepare?: () => Promise<{ params?: Record<string, string>; body?: unknown }>;
+  prepare?: () => Promise<{ params?: Record<string, string>; body?: unknown; form?: FormData }>;
   expected: (who: Who) => number;
 };
 
@@ -146,6 +146,67 @@ const ENDPOINTS: Endpoint[] = [
     // Nobody here is the invitee, so everybody signed in is refused.
     expected: (who) => (who === "none" ? 401 : 403),
   },
+  {
+    key: "GET /api/v1/projects/[projectId]/build-ups",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/build-ups/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("design.view", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/build-ups",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/build-ups/route"),
+    prepare: async () => ({ params: { projectId }, body: buildUpBody() }),
+    expected: projectRule("design.edit", 201),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/build-ups/[buildUpId]",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/build-ups/[buildUpId]/route"),
+    prepare: async () => ({ params: { projectId, buildUpId: makeBuildUp(projectId).id } }),
+    expected: projectRule("design.view", 200),
+  },
+  {
+    key: "PUT /api/v1/projects/[projectId]/build-ups/[buildUpId]",
+    method: "PUT",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/build-ups/[buildUpId]/route"),
+    prepare: async () => ({ params: { projectId, buildUpId: makeBuildUp(projectId).id }, body: { ...buildUpBody(), version: 1 } }),
+    expected: projectRule("design.edit", 200),
+  },
+  {
+    key: "DELETE /api/v1/projects/[projectId]/build-ups/[buildUpId]",
+    method: "DELETE",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/build-ups/[buildUpId]/route"),
+    prepare: async () => ({ params: { projectId, buildUpId: makeBuildUp(projectId).id } }),
+    expected: projectRule("design.edit", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/attachments",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/attachments/route"),
+    prepare: async () => {
+      const form = new FormData();
+      form.set("purpose", "fire-report");
+      form.set("file", new File([TINY_PDF], "report.pdf", { type: "application/pdf" }));
+      return { params: { projectId }, form };
+    },
+    expected: projectRule("design.edit", 201),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/attachments/[attachmentId]",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/attachments/[attachmentId]/route"),
+    prepare: async () => ({ params: { projectId, attachmentId: makeAttachment(projectId).id } }),
+    expected: projectRule("design.view", 200),
+  },
   { key: "GET /api/v1/firm/accounts", method: "GET", writes: false, load: () => import("@/app/api/v1/firm/accounts/route"), expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403) },
   {
     key: "POST /api/v1/firm/invitations",
@@ -156,6 +217,10 @@ const ENDPOINTS: Endpoint[] = [
     expected: (who) => (who === "none" ? 401 : who === "admin" ? 201 : 403),
   },
 ];
+
+function buildUpBody() {
+  return { name: "Walk build-up", spec: SPEC, moduleWidth: 0.6, moduleHeight: 1.2, borderX: 0.03, borderY: 0.03 };
+}
 
 // Every exported handler under app/api/v1 must be listed above.
 function routeHandlersOnDisk(): string[] {
@@ -195,6 +260,7 @@ describe("role walk", () => {
             cookie: who === "none" ? null : cookies[who],
             params: prep.params,
             body: prep.body,
+            form: prep.form,
           });
           expect(res.status, JSON.stringify(res.json)).toBe(status);
           if (status >= 400) {

@@ -6,15 +6,16 @@ export const APP_URL = "http://localhost:3999";
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Handler = (req: Request, ctx: { params: Promise<any> }) => Promise<Response>;
 
-export type CallOptions = { method?: string; body?: unknown; rawBody?: string; cookie?: string | null; params?: Record<string, string>; path?: string };
+export type CallOptions = { method?: string; body?: unknown; rawBody?: string; form?: FormData; cookie?: string | null; params?: Record<string, string>; path?: string };
 
 export async function call(handler: Handler, opts: CallOptions = {}) {
   const headers = new Headers({ origin: APP_URL });
   if (opts.cookie) headers.set("cookie", opts.cookie);
-  let body: string | undefined;
-  if (opts.rawBody !== undefined) body = opts.rawBody;
+  let body: string | FormData | undefined;
+  if (opts.form) body = opts.form;
+  else if (opts.rawBody !== undefined) body = opts.rawBody;
   else if (opts.body !== undefined) body = JSON.stringify(opts.body);
-  if (body !== undefined) headers.set("content-type", "application/json");
+  if (body !== undefined && !opts.form) headers.set("content-type", "application/json");
   const req = new Request(`${APP_URL}${opts.path ?? "/api/v1/test"}`, { method: opts.method ?? "GET", headers, body });
   const res = await handler(req, { params: Promise.resolve(opts.params ?? {}) });
   const text = await res.text();

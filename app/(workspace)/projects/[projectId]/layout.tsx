@@ -1,0 +1,25 @@
+import type { ReactNode } from "react";
+import { notFound } from "next/navigation";
+import { ProjectNav } from "@/components/projects/project-nav";
+import { requirePageActor } from "@/lib/auth/current";
+import { AppError } from "@/lib/errors";
+import { roleMay } from "@/lib/permissions";
+import { authorize } from "@/lib/services/guard";
+
+export default async function ProjectLayout({ children, params }: { children: ReactNode; params: Promise<{ projectId: string }> }) {
+  const { projectId } = await params;
+  const actor = await requirePageActor();
+  let access;
+  try {
+    access = authorize(actor, projectId, "project.view");
+  } catch (e) {
+    if (e instanceof AppError && e.code === "not_found") notFound();
+    throw e;
+  }
+  return (
+    <>
+      <ProjectNav projectId={projectId} projectName={access.project.name} showDesign={roleMay(access.membership.role, "design.view")} />
+      {children}
+    </>
+  );
+}
