@@ -146,6 +146,7 @@ export function baselineEvaluate(b: BuildUp, angles = 16, maxDeg = 78, perBand =
     for (let i = 0; i < perBand; i++) {
       const f = lo * (hi / lo) ** ((i + 0.5) / perBand);
       const zn = surfaceZ(b, f, 0, a);
+      // as the engine does: a negative value (a porous model outside its range) counts as 0
       normal += Math.max(0, alphaOf(zn, 0)) / perBand;
       let sum = 0;
       for (let j = 0; j < angles; j++) {
@@ -153,7 +154,6 @@ export function baselineEvaluate(b: BuildUp, angles = 16, maxDeg = 78, perBand =
         const z = b.cavity.partitioned ? zn : surfaceZ(b, f, theta, a);
         sum += ((max / 2) * w[j] * alphaOf(z, theta) * Math.sin(2 * theta)) / Math.sin(max) ** 2;
       }
-      // as the engine does: a negative value (Delany–Bazley far outside its range) counts as 0
       diffuse += Math.max(0, sum) / perBand;
     }
     thirds.push({ normal, diffuse });
