@@ -1,14 +1,17 @@
 /**
  * peakHz (REFERENCES.md section 0): the frequency of the maximum of the full model's
- * normal-incidence absorption below the cavity's quarter-wave frequency c/(4D), found on a log
- * grid (80 points over three decades, 9 % apart) and refined by golden-section search over the
- * two cells around the best grid point, which holds the maximum of a single-peaked curve.
+ * normal-incidence absorption below the cavity's quarter-wave frequency c/(4D). It is bracketed
+ * on a log grid (40 points over three decades, 19 % apart: the two cells around the best point
+ * hold the maximum of a single-peaked curve) and refined by Brent's method (parabolic steps
+ * safeguarded by golden sections; Brent, Algorithms for Minimization without Derivatives, 1973).
  */
 import type { LayeredModel } from "./layered-model";
 
-const GRID = 80;
+const GRID = 40;
 const SPAN = 1000;
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
+/** absolute tolerance on ln f */
+const TOLERANCE = 1e-8;
+const CGOLD = (3 - Math.sqrt(5)) / 2;
 
 export interface Peak {
   f: number;
@@ -30,28 +33,67 @@ export function findPeak(model: LayeredModel, upper: number): Peak {
     }
   }
   if (best === GRID - 1) return { f: upper, alpha: bestAlpha, atLimit: true };
-  // golden section on log f over the neighbouring grid cells
-  let a = Math.log(lower) + Math.max(best - 1, 0) * step;
-  let b = Math.log(lower) + (best + 1) * step;
-  let x1 = b - GOLDEN * (b - a);
-  let x2 = a + GOLDEN * (b - a);
-  let f1 = model.normalAbsorption(Math.exp(x1));
-  let f2 = model.normalAbsorption(Math.exp(x2));
-  while (b - a > 1e-6) {
-    if (f1 < f2) {
-      a = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = a + GOLDEN * (b - a);
-      f2 = model.normalAbsorption(Math.exp(x2));
+  const a = Math.log(lower) + Math.max(best - 1, 0) * step;
+  const b = Math.log(lower) + (best + 1) * step;
+  const x = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), a, b);
+  const f = Math.exp(x);
+  return { f, alpha: model.normalAbsorption(f), atLimit: false };
+}
+
+/** Brent's minimisation of g on [a, b]. */
+function brentMinimum(g: (x: number) => number, lo: number, hi: number): number {
+  let a = lo;
+  let b = hi;
+  let x = a + CGOLD * (b - a);
+  let w = x;
+  let v = x;
+  let fx = g(x);
+  let fw = fx;
+  let fv = fx;
+  let d = 0;
+  let e = 0;
+  for (let iter = 0; iter < 100; iter++) {
+    const xm = 0.5 * (a + b);
+    if (Math.abs(x - xm) <= 2 * TOLERANCE - 0.5 * (b - a)) break;
+    let golden = true;
+    if (Math.abs(e) > TOLERANCE) {
+      // parabola through x, w, v
+      const r = (x - w) * (fx - fv);
+      let q = (x - v) * (fx - fw);
+      let p = (x - v) * q - (x - w) * r;
+      q = 2 * (q - r);
+      if (q > 0) p = -p;
+      q = Math.abs(q);
+      if (Math.abs(p) < Math.abs(0.5 * q * e) && p > q * (a - x) && p < q * (b - x)) {
+        e = d;
+        d = p / q;
+        const u = x + d;
+        if (u - a < 2 * TOLERANCE || b - u < 2 * TOLERANCE) d = xm >= x ? TOLERANCE : -TOLERANCE;
+        golden = false;
+      }
+    }
+    if (golden) {
+      e = x >= xm ? a - x : b - x;
+      d = CGOLD * e;
+    }
+    const u = Math.abs(d) >= TOLERANCE ? x + d : x + (d >= 0 ? TOLERANCE : -TOLERANCE);
+    const fu = g(u);
+    if (fu <= fx) {
+      if (u >= x) a = x;
+      else b = x;
+      [v, w, x] = [w, x, u];
+      [fv, fw, fx] = [fw, fx, fu];
     } else {
-      b = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = b - GOLDEN * (b - a);
-      f1 = model.normalAbsorption(Math.exp(x1));
+      if (u < x) a = u;
+      else b = u;
+      if (fu <= fw || w === x) {
+        [v, w] = [w, u];
+        [fv, fw] = [fw, fu];
+      } else if (fu <= fv || v === x || v === w) {
+        v = u;
+        fv = fu;
+      }
     }
   }
-  const f = Math.exp(0.5 * (a + b));
-  return { f, alpha: model.normalAbsorption(f), atLimit: false };
+  return x;
 }

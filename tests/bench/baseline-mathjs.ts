@@ -161,7 +161,7 @@ export function baselineEvaluate(b: BuildUp, angles = 16, maxDeg = 78, perBand =
   return { thirds, peakHz: baselinePeak(b, a) };
 }
 
-/** The same peak search as the engine: 80-point log grid below c/(4D), golden section. */
+/** The peak below c/(4D) by an 80-point log grid and golden sections (the engine brackets on 40 points and refines by Brent's method; both converge on the same maximum). */
 function baselinePeak(b: BuildUp, a: Air): number {
   const upper = a.c / (4 * b.cavity.depth);
   const lower = upper / 1000;
@@ -177,7 +177,7 @@ function baselinePeak(b: BuildUp, a: Air): number {
   let lo = Math.log(lower) + Math.max(best - 1, 0) * step;
   let hi = Math.log(lower) + (best + 1) * step;
   const g = (Math.sqrt(5) - 1) / 2;
-  while (hi - lo > 1e-6) {
+  while (hi - lo > 1e-8) {
     const x1 = hi - g * (hi - lo);
     const x2 = lo + g * (hi - lo);
     if (alpha(x1) < alpha(x2)) lo = x1;
