@@ -18,12 +18,11 @@ const K = 24 * Math.LN10;
 // REFERENCES.md T8c [SRC-CONFIRMED formula, COMPUTED values]: 4m (1/m) at 20 °C, 50 %, exact mid-band.
 const FOUR_M: Record<number, number> = { 125: 4.102e-4, 250: 1.214e-3, 500: 2.518e-3, 1000: 4.296e-3, 2000: 9.077e-3, 4000: 2.71e-2 };
 
-/** The room of REFERENCES.md 8.3: 10 × 8 × 3 m, the same α in every band. */
-function referenceRoom(alpha: (key: string) => Record<string, number>): CheckSurface[] {
-  const by: Record<string, number> = { "wall-a": 0.05, "wall-b": 0.1, "wall-c": 0.05, "wall-d": 0.1, ceiling: 0.7, floor: 0.05 };
-  return shoeboxSurfaces({ length: 10, width: 8, height: 3 }).map((s) => ({ key: s.key, name: s.name, area: s.width * s.height, alpha: alpha(s.key) ?? flat(by[s.key]) }));
-}
+/** The room of REFERENCES.md 8.3: 10 × 8 × 3 m; its α, the same in every band, below. */
 const REFERENCE_ALPHA: Record<string, number> = { "wall-a": 0.05, "wall-b": 0.1, "wall-c": 0.05, "wall-d": 0.1, ceiling: 0.7, floor: 0.05 };
+function referenceRoom(alpha: (key: string) => Record<string, number>): CheckSurface[] {
+  return shoeboxSurfaces({ length: 10, width: 8, height: 3 }).map((s) => ({ key: s.key, name: s.name, area: s.width * s.height, alpha: alpha(s.key) }));
+}
 
 function input(over: Partial<CheckInput> = {}): CheckInput {
   return {
