@@ -32,10 +32,11 @@ export function findPeak(model: LayeredModel, upper: number): Peak {
       best = i;
     }
   }
-  if (best === GRID - 1) return { f: upper, alpha: bestAlpha, atLimit: true };
+  // the best grid point at the limit still leaves the last cell to search
   const a = Math.log(lower) + Math.max(best - 1, 0) * step;
-  const b = Math.log(lower) + (best + 1) * step;
+  const b = Math.log(lower) + Math.min(best + 1, GRID - 1) * step;
   const x = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), a, b);
+  if (b - x < 10 * TOLERANCE && best === GRID - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true };
   const f = Math.exp(x);
   return { f, alpha: model.normalAbsorption(f), atLimit: false };
 }

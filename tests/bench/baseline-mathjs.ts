@@ -173,9 +173,8 @@ function baselinePeak(b: BuildUp, a: Air): number {
     const v = alpha(Math.log(lower) + i * step);
     if (v > bestAlpha) [best, bestAlpha] = [i, v];
   }
-  if (best === 79) return upper;
   let lo = Math.log(lower) + Math.max(best - 1, 0) * step;
-  let hi = Math.log(lower) + (best + 1) * step;
+  let hi = Math.log(lower) + Math.min(best + 1, 79) * step;
   const g = (Math.sqrt(5) - 1) / 2;
   while (hi - lo > 1e-8) {
     const x1 = hi - g * (hi - lo);
@@ -183,5 +182,5 @@ function baselinePeak(b: BuildUp, a: Air): number {
     if (alpha(x1) < alpha(x2)) lo = x1;
     else hi = x2;
   }
-  return Math.exp(0.5 * (lo + hi));
+  return best === 79 && Math.log(upper) - 0.5 * (lo + hi) < 1e-7 ? upper : Math.exp(0.5 * (lo + hi));
 }

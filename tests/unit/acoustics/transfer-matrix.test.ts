@@ -67,6 +67,18 @@ describe("independent route: full 2×2 matrices with mathjs complex numbers (tes
     expect(Math.abs((fast.peakHz ?? 0) - slow.peakHz)).toBeLessThan(1e-6 * slow.peakHz);
   };
   it.each(benchCases)("$name", ({ buildUp }) => compare(buildUp));
+  it("a peak in the last grid cell below c/(4D) is found, not taken for the limit (found by fast-check)", () => {
+    const light: BuildUp = {
+      facing: { kind: "micro-perforated", thickness: 0.0003, holeDiameter: 0.0002, grid: "square", pitch: 0.00026 },
+      cavity: { depth: 0.01, partitioned: false },
+      infill: null,
+    };
+    compare(light);
+    const e = evaluateBuildUp(light);
+    expect(e.peakHz).toBeLessThan(e.quarterWaveHz * 0.99);
+    expect(e.warnings.map((w) => w.code)).not.toContain("no-peak");
+  });
+
   it("random build-ups agree to 1e-9 [fast-check, 6 runs: the baseline is slow]", () => {
     fc.assert(fc.property(arbitraryBuildUp({ withinRange: true }), compare), { numRuns: 6 });
   });
