@@ -1,7 +1,8 @@
 import { eq } from "drizzle-orm";
 import { hashPassword } from "better-auth/crypto";
 import type { Db } from "./client";
-import { account, buildUp, firm, membership, project, room, user, type ProjectRole, type RoomUse } from "./schema";
+import { shoeboxSurfaces } from "../lib/rooms/geometry";
+import { account, buildUp, firm, membership, opening, project, room, surface, treatment, user, type ProjectRole, type RoomUse } from "./schema";
 
 // The demo scenario. Everything here is FICTIONAL: the firms, the people, the arts centre
 // and its rooms are invented for the demo and resemble no real organisation or person.
@@ -42,13 +43,86 @@ const LIBRARY: typeof ARTS_CENTRE = {
   ],
 };
 
-const ARTS_ROOMS: { name: string; use: RoomUse; length: number; width: number; height: number }[] = [
-  { name: "Rehearsal room", use: "music", length: 12, width: 9, height: 4.5 },
-  { name: "Lecture room", use: "speech", length: 14, width: 10, height: 3.2 },
-  { name: "Café", use: "dining", length: 18, width: 11, height: 3.6 },
+type DemoOpening = { kind: "door" | "window" | "glazing" | "vent"; name: string; x: number; y: number; width: number; height: number; material: string };
+type DemoRoom = {
+  name: string;
+  use: RoomUse;
+  length: number;
+  width: number;
+  height: number;
+  finishes: Record<string, string>;
+  openings: Record<string, DemoOpening[]>;
+  treatments: { surface: string; buildUp: string; area: number }[];
+};
+
+const ARTS_ROOMS: DemoRoom[] = [
+  {
+    name: "Rehearsal room",
+    use: "music",
+    length: 12,
+    width: 9,
+    height: 4.5,
+    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "concrete-block-painted", "wall-c": "plaster-on-masonry", "wall-d": "brick-painted", ceiling: "painted-concrete", floor: "timber-floor-on-joists" },
+    openings: {
+      "wall-b": [{ kind: "door", name: "Double door to foyer", x: 3.6, y: 0, width: 1.8, height: 2.1, material: "timber-door" }],
+      "wall-d": [
+        { kind: "window", name: "Window 1", x: 1.5, y: 1.2, width: 2.4, height: 1.5, material: "window-glass" },
+        { kind: "window", name: "Window 2", x: 5.1, y: 1.2, width: 2.4, height: 1.5, material: "window-glass" },
+      ],
+    },
+    treatments: [
+      { surface: "wall-a", buildUp: "Bass panel, rehearsal room", area: 21.6 },
+      { surface: "wall-c", buildUp: "Bass panel, rehearsal room", area: 14.4 },
+      { surface: "ceiling", buildUp: "Ceiling raft, café", area: 30 },
+    ],
+  },
+  {
+    name: "Lecture room",
+    use: "speech",
+    length: 14,
+    width: 10,
+    height: 3.2,
+    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "plaster-on-masonry", "wall-d": "gypsum-board-on-studs", ceiling: "gypsum-board-ceiling", floor: "vinyl-on-concrete" },
+    openings: {
+      "wall-a": [{ kind: "glazing", name: "Window band", x: 1, y: 0.9, width: 12, height: 1.6, material: "glass-large-pane" }],
+      "wall-b": [{ kind: "door", name: "Door to corridor", x: 0.6, y: 0, width: 1, height: 2.1, material: "timber-door" }],
+    },
+    treatments: [
+      { surface: "wall-c", buildUp: "Slotted speech panel, lecture room", area: 24 },
+      { surface: "wall-d", buildUp: "Slotted speech panel, lecture room", area: 14.4 },
+      { surface: "ceiling", buildUp: "Ceiling raft, café", area: 40 },
+    ],
+  },
+  {
+    name: "Café",
+    use: "dining",
+    length: 18,
+    width: 11,
+    height: 3.6,
+    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "brick-unglazed", "wall-d": "plaster-on-masonry", ceiling: "painted-concrete", floor: "ceramic-tile" },
+    openings: {
+      "wall-a": [{ kind: "glazing", name: "Shop front", x: 1, y: 0.2, width: 16, height: 2.6, material: "glass-large-pane" }],
+      "wall-b": [{ kind: "door", name: "Door to kitchen", x: 8, y: 0, width: 1, height: 2.1, material: "timber-door" }],
+    },
+    treatments: [
+      { surface: "ceiling", buildUp: "Ceiling raft, café", area: 90 },
+      { surface: "wall-c", buildUp: "Slotted speech panel, lecture room", area: 20 },
+    ],
+  },
 ];
 
-const LIBRARY_ROOMS: typeof ARTS_ROOMS = [{ name: "Reading room", use: "teaching", length: 16, width: 8, height: 3.4 }];
+const LIBRARY_ROOMS: DemoRoom[] = [
+  {
+    name: "Reading room",
+    use: "teaching",
+    length: 16,
+    width: 8,
+    height: 3.4,
+    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "plywood-on-battens", "wall-d": "plaster-on-masonry", ceiling: "painted-concrete", floor: "carpet-thin-on-concrete" },
+    openings: { "wall-a": [{ kind: "window", name: "Windows", x: 1, y: 0.9, width: 13, height: 1.8, material: "window-glass" }] },
+    treatments: [],
+  },
+];
 
 // Two tuned build-ups for the arts centre (invented products; the numbers are the engine's).
 const ARTS_BUILD_UPS = [
@@ -86,6 +160,23 @@ const ARTS_BUILD_UPS = [
     fireClass: "",
     notes: "Mid-frequency absorber for the lecture room walls.",
   },
+  {
+    name: "Ceiling raft, café",
+    spec: {
+      facing: { kind: "round-holes", thickness: 0.0125, holeDiameter: 0.008, pitch: 0.018, grid: "staggered" },
+      cavity: { depth: 0.1, partitioned: false },
+      infill: { thickness: 0.05, flowResistivity: 10000, position: "behind-facing", model: "miki" },
+      air: { temperature: 20, pressure: 101325 },
+    },
+    moduleWidth: 1.2,
+    moduleHeight: 1.2,
+    borderX: 0.05,
+    borderY: 0.05,
+    facingMaterial: "12.5 mm perforated gypsum board with fleece (demo product)",
+    fireStandard: "EN 13501-1" as const,
+    fireClass: "A2-s1,d0",
+    notes: "Broadband mid-frequency raft; open plenum above.",
+  },
 ];
 
 export async function seedDemo(db: Db): Promise<{ created: boolean }> {
@@ -120,13 +211,26 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         .returning()
         .get();
       for (const [key, role] of spec.members) tx.insert(membership).values({ projectId: p.id, userId: ids[key], role }).run();
+      const buildUpIds = new Map<string, string>();
       if (spec === ARTS_CENTRE) {
-        for (const b of ARTS_BUILD_UPS) tx.insert(buildUp).values({ projectId: p.id, ...b, spec: JSON.stringify(b.spec) }).run();
+        for (const b of ARTS_BUILD_UPS) {
+          const row = tx.insert(buildUp).values({ projectId: p.id, ...b, spec: JSON.stringify(b.spec) }).returning().get();
+          buildUpIds.set(b.name, row.id);
+        }
       }
       for (const r of rooms) {
-        tx.insert(room)
-          .values({ projectId: p.id, ...r, volume: r.length * r.width * r.height, temperature: 20, humidity: 50 })
-          .run();
+        const made = tx
+          .insert(room)
+          .values({ projectId: p.id, name: r.name, use: r.use, shape: "shoebox", length: r.length, width: r.width, height: r.height, volume: r.length * r.width * r.height, temperature: 20, humidity: 50 })
+          .returning()
+          .get();
+        shoeboxSurfaces(r).forEach((shape, position) => {
+          const row = tx.insert(surface).values({ roomId: made.id, ...shape, finish: r.finishes[shape.key], position }).returning().get();
+          (r.openings[shape.key] ?? []).forEach((o, i) => tx.insert(opening).values({ surfaceId: row.id, ...o, position: i }).run());
+        });
+        for (const t of r.treatments) {
+          tx.insert(treatment).values({ roomId: made.id, surfaceKey: t.surface, buildUpId: buildUpIds.get(t.buildUp)!, area: t.area }).run();
+        }
       }
     }
   });

@@ -37,11 +37,10 @@ CREATE TABLE `opening` (
 	`y` real NOT NULL,
 	`width` real NOT NULL,
 	`height` real NOT NULL,
-	`library_material` text,
-	`project_material_id` text,
+	`material` text NOT NULL,
+	`position` integer DEFAULT 0 NOT NULL,
 	`created_at` integer NOT NULL,
-	FOREIGN KEY (`surface_id`) REFERENCES `surface`(`id`) ON UPDATE no action ON DELETE cascade,
-	FOREIGN KEY (`project_material_id`) REFERENCES `project_material`(`id`) ON UPDATE no action ON DELETE restrict
+	FOREIGN KEY (`surface_id`) REFERENCES `surface`(`id`) ON UPDATE no action ON DELETE cascade
 );
 --> statement-breakpoint
 CREATE INDEX `opening_surface_idx` ON `opening` (`surface_id`);--> statement-breakpoint
@@ -53,15 +52,13 @@ CREATE TABLE `surface` (
 	`kind` text NOT NULL,
 	`width` real NOT NULL,
 	`height` real NOT NULL,
-	`library_material` text,
-	`project_material_id` text,
+	`finish` text NOT NULL,
 	`position` integer DEFAULT 0 NOT NULL,
 	`created_at` integer NOT NULL,
-	FOREIGN KEY (`room_id`) REFERENCES `room`(`id`) ON UPDATE no action ON DELETE cascade,
-	FOREIGN KEY (`project_material_id`) REFERENCES `project_material`(`id`) ON UPDATE no action ON DELETE restrict
+	FOREIGN KEY (`room_id`) REFERENCES `room`(`id`) ON UPDATE no action ON DELETE cascade
 );
 --> statement-breakpoint
-CREATE INDEX `surface_room_idx` ON `surface` (`room_id`);--> statement-breakpoint
+CREATE UNIQUE INDEX `surface_room_key_uq` ON `surface` (`room_id`,`key`);--> statement-breakpoint
 CREATE TABLE `build_up` (
 	`id` text PRIMARY KEY NOT NULL,
 	`project_id` text NOT NULL,
@@ -87,12 +84,11 @@ CREATE INDEX `build_up_project_idx` ON `build_up` (`project_id`);--> statement-b
 CREATE TABLE `treatment` (
 	`id` text PRIMARY KEY NOT NULL,
 	`room_id` text NOT NULL,
-	`surface_id` text NOT NULL,
+	`surface_key` text NOT NULL,
 	`build_up_id` text NOT NULL,
 	`area` real NOT NULL,
 	`created_at` integer NOT NULL,
 	FOREIGN KEY (`room_id`) REFERENCES `room`(`id`) ON UPDATE no action ON DELETE cascade,
-	FOREIGN KEY (`surface_id`) REFERENCES `surface`(`id`) ON UPDATE no action ON DELETE cascade,
 	FOREIGN KEY (`build_up_id`) REFERENCES `build_up`(`id`) ON UPDATE no action ON DELETE cascade
 );
 --> statement-breakpoint

@@ -8,7 +8,7 @@ import { uploadFile } from "@/lib/queries/build-ups";
 import { ApiError } from "@/lib/queries/api";
 import type { UnitPreference } from "@/lib/units";
 import { SelectField, TextField } from "@/components/ui/field";
-import { MeasureField } from "./measure-field";
+import { MeasureField } from "@/components/ui/measure-field";
 import { facingOfKind } from "./facing-defaults";
 
 export type Draft = BuildUpFields;

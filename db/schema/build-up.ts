@@ -3,7 +3,6 @@ import { createdAt, id, updatedAt } from "./columns";
 import { project } from "./project";
 import { attachment } from "./attachment";
 import { room } from "./room";
-import { surface } from "./surface";
 
 // A panel build-up of a project's library. `spec` is the calculation contract's evaluate
 // input as JSON (facing, cavity, infill), so the bench, the check and the command line agree.
@@ -33,7 +32,7 @@ export const buildUp = sqliteTable(
 );
 
 // Treated area of a build-up on a surface, counted by area until the elevation board places
-// individual panels.
+// individual panels. A surface removed from the room takes its treatments with it (service).
 export const treatment = sqliteTable(
   "treatment",
   {
@@ -41,9 +40,8 @@ export const treatment = sqliteTable(
     roomId: text("room_id")
       .notNull()
       .references(() => room.id, { onDelete: "cascade" }),
-    surfaceId: text("surface_id")
-      .notNull()
-      .references(() => surface.id, { onDelete: "cascade" }),
+    // the surface's key within the room (db/schema/surface.ts)
+    surfaceKey: text("surface_key").notNull(),
     buildUpId: text("build_up_id")
       .notNull()
       .references(() => buildUp.id, { onDelete: "cascade" }),

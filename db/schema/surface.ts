@@ -1,10 +1,10 @@
-import { integer, real, sqliteTable, text, index } from "drizzle-orm/sqlite-core";
+import { integer, real, sqliteTable, text, index, uniqueIndex } from "drizzle-orm/sqlite-core";
 import { createdAt, id } from "./columns";
 import { room } from "./room";
-import { projectMaterial } from "./material";
-
-// A wall elevation, ceiling or floor of a room, with its finish: a library material key or a
-// project material (exactly one of the two).
+// A wall elevation, ceiling or floor of a room, with its finish. Finishes and opening
+// materials are material keys: a built-in library key, or "project:<id>" for a project's own
+// material (lib/services/materials.ts resolves both). `key` is stable within the room, so
+// treatments and, later, panels stay attached when the room's dimensions change.
 export const surface = sqliteTable(
   "surface",
   {
@@ -17,12 +17,11 @@ export const surface = sqliteTable(
     kind: text("kind", { enum: ["wall", "ceiling", "floor"] }).notNull(),
     width: real("width").notNull(),
     height: real("height").notNull(),
-    libraryMaterial: text("library_material"),
-    projectMaterialId: text("project_material_id").references(() => projectMaterial.id, { onDelete: "restrict" }),
+    finish: text("finish").notNull(),
     position: integer("position").notNull().default(0),
     createdAt: createdAt(),
   },
-  (t) => [index("surface_room_idx").on(t.roomId)],
+  (t) => [uniqueIndex("surface_room_key_uq").on(t.roomId, t.key)],
 );
 
 // A door, window, glazing or vent on a surface, positioned from the surface's lower-left corner.
@@ -39,8 +38,8 @@ export const opening = sqliteTable(
     y: real("y").notNull(),
     width: real("width").notNull(),
     height: real("height").notNull(),
-    libraryMaterial: text("library_material"),
-    projectMaterialId: text("project_material_id").references(() => projectMaterial.id, { onDelete: "restrict" }),
+    material: text("material").notNull(),
+    position: integer("position").notNull().default(0),
     createdAt: createdAt(),
   },
   (t) => [index("opening_surface_idx").on(t.surfaceId)],

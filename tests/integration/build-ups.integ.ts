@@ -36,10 +36,10 @@ async function create(over: Record<string, unknown> = {}) {
   return call((await list()).POST, { method: "POST", cookie: cookie.consultant, params: { projectId }, body: body(over) });
 }
 
-function upload(bytes: Uint8Array, name: string, purpose = "fire-report", who = "consultant", project = projectId) {
+function upload(bytes: Uint8Array<ArrayBuffer>, name: string, purpose = "fire-report", who = "consultant", project = projectId) {
   const form = new FormData();
   form.set("purpose", purpose);
-  form.set("file", new File([bytes], name));
+  form.set("file", new File([new Uint8Array(bytes)], name));
   return uploads().then((m) => call(m.POST, { method: "POST", cookie: cookie[who], params: { projectId: project }, form }));
 }
 

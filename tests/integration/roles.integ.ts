@@ -207,6 +207,65 @@ const ENDPOINTS: Endpoint[] = [
     prepare: async () => ({ params: { projectId, attachmentId: makeAttachment(projectId).id } }),
     expected: projectRule("design.view", 200),
   },
+  {
+    key: "GET /api/v1/projects/[projectId]/rooms",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("design.view", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/rooms",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/route"),
+    prepare: async () => ({ params: { projectId }, body: roomBody() }),
+    expected: projectRule("design.edit", 201),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/rooms/[roomId]",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() } }),
+    expected: projectRule("design.view", 200),
+  },
+  {
+    key: "PUT /api/v1/projects/[projectId]/rooms/[roomId]",
+    method: "PUT",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() }, body: { ...roomBody(), name: "Renamed", version: 1 } }),
+    expected: projectRule("design.edit", 200),
+  },
+  {
+    key: "DELETE /api/v1/projects/[projectId]/rooms/[roomId]",
+    method: "DELETE",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() } }),
+    expected: projectRule("design.edit", 200),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/materials",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/materials/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("design.view", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/materials",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/materials/route"),
+    prepare: async () => ({
+      params: { projectId },
+      body: { name: "Walk material", alpha: { "125": 0.1, "250": 0.2, "500": 0.3, "1000": 0.4, "2000": 0.5, "4000": 0.6 }, source: "walk test values (invented)" },
+    }),
+    expected: projectRule("design.edit", 201),
+  },
   { key: "GET /api/v1/firm/accounts", method: "GET", writes: false, load: () => import("@/app/api/v1/firm/accounts/route"), expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403) },
   {
     key: "POST /api/v1/firm/invitations",
@@ -217,6 +276,16 @@ const ENDPOINTS: Endpoint[] = [
     expected: (who) => (who === "none" ? 401 : who === "admin" ? 201 : 403),
   },
 ];
+
+function roomBody() {
+  return { name: "Walk room", use: "speech", shape: "shoebox", length: 8, width: 6, height: 3 };
+}
+
+async function freshRoom(): Promise<string> {
+  const { createRoom } = await import("@/lib/services/rooms");
+  const { actorFromHeaders } = await import("@/lib/auth/session");
+  return createRoom(await actorFromHeaders(new Headers({ cookie: cookies.consultant })), projectId, roomBody()).id;
+}
 
 function buildUpBody() {
   return { name: "Walk build-up", spec: SPEC, moduleWidth: 0.6, moduleHeight: 1.2, borderX: 0.03, borderY: 0.03 };

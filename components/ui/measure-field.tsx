@@ -12,19 +12,22 @@ type Props = {
   range?: { min: number; max: number; step: number };
   error?: string;
   testId?: string;
+  /** show millimetres / inches (panel sizes) rather than metres / feet (room sizes) */
+  small?: boolean;
+  compact?: boolean;
 };
 
 // A length typed in the user's units ("19 mm", "3/4 in") with an optional slider. Typing is
 // parsed after a short pause; the slider changes the value at once, so the curve follows it.
-export function MeasureField({ label, metres, units, onChange, range, error, testId }: Props) {
+export function MeasureField({ label, metres, units, onChange, range, error, testId, small = true, compact = false }: Props) {
   const id = useId();
-  const [text, setText] = useState(() => formatLength(metres, units, { small: true }));
+  const [text, setText] = useState(() => formatLength(metres, units, { small }));
   const [parseError, setParseError] = useState<string | null>(null);
   const focused = useRef(false);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
 
   useEffect(() => {
-    if (!focused.current) setText(formatLength(metres, units, { small: true }));
+    if (!focused.current) setText(formatLength(metres, units, { small }));
   }, [metres, units]);
 
   useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
@@ -42,7 +45,7 @@ export function MeasureField({ label, metres, units, onChange, range, error, tes
   const shown = parseError ?? error;
   return (
     <div className="flex flex-col gap-1" data-testid={testId}>
-      <label htmlFor={id} className="text-xs font-semibold uppercase tracking-wider text-ink-soft">
+      <label htmlFor={id} className={compact ? "sr-only" : "text-xs font-semibold uppercase tracking-wider text-ink-soft"}>
         {label}
       </label>
       <input
@@ -61,7 +64,7 @@ export function MeasureField({ label, metres, units, onChange, range, error, tes
           if (timer.current) clearTimeout(timer.current);
           timer.current = setTimeout(() => commit(value), 150);
         }}
-        className={`figures rounded-sheet border bg-white/70 px-2.5 py-1.5 text-sm focus:border-copper focus:outline-none ${shown ? "border-fault" : "border-paper-edge"}`}
+        className={`figures w-full min-w-0 rounded-sheet border bg-white/70 px-2.5 py-1.5 text-sm focus:border-copper focus:outline-none ${shown ? "border-fault" : "border-paper-edge"}`}
       />
       {range && (
         <input

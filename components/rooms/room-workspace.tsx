@@ -1,0 +1,138 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import { useQuery } from "@tanstack/react-query";
+import type { RoomView } from "@/lib/services/rooms";
+import type { MaterialView } from "@/lib/services/materials";
+import type { BuildUpView } from "@/lib/services/build-ups";
+import type { RoomFields } from "@/lib/schemas/room";
+import { roomIssues, runCheck, surfacesFor, checkInputFor, type PanelAlpha } from "@/lib/room-model";
+import { octaveAlphaFromBands } from "@/lib/rooms/octaves";
+import { roomQuery, useSaveRoom } from "@/lib/queries/rooms";
+import { ApiError } from "@/lib/queries/api";
+import { ROOM_USE_WORDS } from "@/lib/room-uses";
+import { formatVolume, type UnitPreference } from "@/lib/units";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import { TitleBlock } from "@/components/ui/sheet";
+import { CheckPanel } from "./check-panel";
+import { RoomFieldsEditor } from "./room-fields-editor";
+import { SurfacesEditor } from "./surfaces-editor";
+import { TreatmentsEditor } from "./treatments-editor";
+
+function fieldsOf(room: RoomView): RoomFields {
+  const { id: _i, projectId: _p, version: _v, updatedAt: _u, volumeM3: _vol, targetResolved: _t, check: _c, warnings: _w, surfaces, ...rest } = room;
+  return { ...rest, surfaces: surfaces.map(({ grossArea: _g, netArea: _n, ...s }) => s) };
+}
+
+type Props = { initial: RoomView; materials: MaterialView[]; buildUps: BuildUpView[]; units: UnitPreference; mayEdit: boolean };
+
+// A room: its check on top, recomputed in the browser as the model below is edited (the same
+// code as the server's), then the model itself. Saves name the version they started from.
+export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: Props) {
+  const { data: saved = initial, refetch } = useQuery({ ...roomQuery(initial.projectId, initial.id), initialData: initial });
+  const [draft, setDraft] = useState<RoomFields>(() => fieldsOf(initial));
+  const [base, setBase] = useState(initial.version);
+  const [conflict, setConflict] = useState<string | null>(null);
+  const save = useSaveRoom(initial.projectId, initial.id);
+
+  const panels = useMemo(() => new Map<string, PanelAlpha>(buildUps.map((b) => [b.id, { name: b.name, alpha: octaveAlphaFromBands(b.result.octaves) }])), [buildUps]);
+  const lookup = useMemo(() => {
+    const byKey = new Map(materials.map((m) => [m.key, m.alpha]));
+    return (key: string) => byKey.get(key);
+  }, [materials]);
+  const surfaces = useMemo(() => surfacesFor(draft), [draft]);
+  const issues = useMemo(() => roomIssues(draft, surfaces, panels, lookup), [draft, surfaces, panels, lookup]);
+  const errors = issues.filter((i) => i.severity === "error");
+  const live = useMemo(
+    () => (errors.length ? null : runCheck({ fields: draft, surfaces, treatments: draft.treatments, panels, lookup })),
+    [draft, surfaces, panels, lookup, errors.length],
+  );
+  const checkInput = useMemo(() => (errors.length ? null : checkInputFor({ fields: draft, surfaces, treatments: draft.treatments, panels, lookup }).input), [draft, surfaces, panels, lookup, errors.length]);
+
+  const serverError = save.error instanceof ApiError ? save.error : null;
+  const fieldError = (field: string) => errors.find((e) => e.field === field)?.message ?? serverError?.fieldMessage(field);
+  const dirty = JSON.stringify(draft) !== JSON.stringify(fieldsOf(saved)) || base !== saved.version;
+
+  async function onSave() {
+    setConflict(null);
+    try {
+      const next = await save.mutateAsync({ ...draft, version: base });
+      setDraft(fieldsOf(next));
+      setBase(next.version);
+    } catch (e) {
+      if (e instanceof ApiError && e.status === 409) setConflict(e.message);
+    }
+  }
+
+  async function reload() {
+    const fresh = (await refetch()).data;
+    if (fresh) {
+      setDraft(fieldsOf(fresh));
+      setBase(fresh.version);
+    }
+    setConflict(null);
+    save.reset();
+  }
+
+  const volume = live?.check.ok ? checkInput?.volume : saved.volumeM3;
+  return (
+    <>
+      <TitleBlock
+        kicker="Room"
+        title={draft.name || "Untitled room"}
+        meta={
+          <span data-testid="room-meta">
+            {ROOM_USE_WORDS[draft.use]} · {volume ? formatVolume(volume, units) : "volume unknown"} · {dirty ? "unsaved changes" : `saved, version ${base}`}
+          </span>
+        }
+        actions={
+          mayEdit ? (
+            <Button onClick={onSave} disabled={!dirty || save.isPending || errors.length > 0}>
+              {save.isPending ? "Saving…" : "Save room"}
+            </Button>
+          ) : undefined
+        }
+      />
+      {conflict && (
+        <div className="mb-6">
+          <Notice tone="caution" title="Someone else saved this room">
+            {conflict}{" "}
+            <button type="button" className="font-semibold underline" onClick={reload}>
+              Reload their version
+            </button>
+          </Notice>
+        </div>
+      )}
+      {serverError && serverError.status !== 409 && (
+        <div className="mb-6">
+          <Notice tone="fault" title={serverError.message}>
+            {serverError.issues.length > 0 && (
+              <ul className="list-disc pl-5">
+                {serverError.issues.map((i) => (
+                  <li key={i.field}>
+                    {i.field}: {i.message}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Notice>
+        </div>
+      )}
+      {live ? (
+        <CheckPanel check={live.check} target={live.target} />
+      ) : (
+        <Notice tone="caution" title="Fix the marked fields to see the check">
+          {errors.length} {errors.length === 1 ? "field needs" : "fields need"} attention below. Nothing has been saved or lost.
+        </Notice>
+      )}
+      <fieldset disabled={!mayEdit} className="mt-8 grid gap-6 xl:grid-cols-[1fr_1.6fr]">
+        <RoomFieldsEditor draft={draft} onChange={setDraft} units={units} fieldError={fieldError} />
+        <div className="flex flex-col gap-6">
+          <SurfacesEditor draft={draft} onChange={setDraft} surfaces={surfaces} materials={materials} units={units} fieldError={fieldError} />
+          <TreatmentsEditor draft={draft} onChange={setDraft} surfaces={surfaces} buildUps={buildUps} panels={panels} checkInput={checkInput} units={units} fieldError={fieldError} />
+        </div>
+      </fieldset>
+    </>
+  );
+}

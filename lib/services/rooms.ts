@@ -1,0 +1,200 @@
+import { and, asc, eq, inArray } from "drizzle-orm";
+import { getDb, transaction, type Tx } from "@/db/client";
+import { buildUp, opening, room, surface, treatment, type Room } from "@/db/schema";
+import { conflict, invalid, notFound } from "@/lib/errors";
+import type { CheckResult } from "@/lib/rooms/check";
+import { netArea, grossArea, roomVolume, type Surface } from "@/lib/rooms/geometry";
+import type { Issue } from "@/lib/rooms/issues";
+import type { Target } from "@/lib/rooms/targets";
+import { parseInput } from "@/lib/schemas/parse";
+import { createRoomSchema, updateRoomSchema, type RoomFields } from "@/lib/schemas/room";
+import type { Actor } from "./actor";
+import { authorize } from "./guard";
+import { recordAudit } from "./audit";
+import { materialLookup } from "./materials";
+import { fieldsFromRows, geometryOf, panelAlphaOf, roomIssues, runCheck, surfacesFor, type PanelAlpha } from "@/lib/room-model";
+
+export type RoomView = Omit<RoomFields, "surfaces"> & {
+  id: string;
+  projectId: string;
+  version: number;
+  updatedAt: string;
+  volumeM3: number;
+  surfaces: (RoomFields["surfaces"][number] & { grossArea: number; netArea: number })[];
+  target: RoomFields["target"];
+  targetResolved: Target | null;
+  check: CheckResult;
+  warnings: Issue[];
+};
+
+export type RoomSummary = Pick<RoomView, "id" | "name" | "use" | "volumeM3" | "version" | "updatedAt"> & {
+  target: string | null;
+  mean: { before: number | null; after: number | null; low: number | null; high: number | null; status: string } | null;
+  treatedArea: number;
+};
+
+// Each build-up of the project evaluated once per request, for every room that uses it.
+function projectPanels(projectId: string): Map<string, PanelAlpha> {
+  return new Map(getDb().select().from(buildUp).where(eq(buildUp.projectId, projectId)).all().map((b) => [b.id, panelAlphaOf(b)]));
+}
+
+function loadRoom(projectId: string, roomId: string): Room {
+  const row = getDb()
+    .select()
+    .from(room)
+    .where(and(eq(room.id, roomId), eq(room.projectId, projectId)))
+    .get();
+  if (!row) throw notFound("Room");
+  return row;
+}
+
+function storedFields(row: Room): RoomFields {
+  const db = getDb();
+  const surfaces = db.select().from(surface).where(eq(surface.roomId, row.id)).all();
+  const openings = surfaces.length ? db.select().from(opening).where(inArray(opening.surfaceId, surfaces.map((s) => s.id))).all() : [];
+  const treatments = db.select().from(treatment).where(eq(treatment.roomId, row.id)).all();
+  return fieldsFromRows(row, surfaces, openings, treatments);
+}
+
+function view(row: Room, fields: RoomFields, panels: Map<string, PanelAlpha>): RoomView {
+  const surfaces = surfacesFor(fields);
+  const { check, target, issues } = runCheck({ fields, surfaces, treatments: fields.treatments, panels, lookup: materialLookup(row.projectId) });
+  return {
+    ...fields,
+    id: row.id,
+    projectId: row.projectId,
+    version: row.version,
+    updatedAt: row.updatedAt.toISOString(),
+    volumeM3: roomVolume(geometryOf(fields)),
+    surfaces: surfaces.map((s) => ({ ...s, name: s.name, openings: s.openings.map((o) => ({ ...o, name: o.name ?? "" })), grossArea: grossArea(s), netArea: netArea(s) })),
+    targetResolved: target,
+    check,
+    warnings: [...issues, ...(check.ok ? check.issues.filter((i) => i.severity === "warning") : [])],
+  };
+}
+
+export function listRooms(actor: Actor | null, projectId: string): RoomSummary[] {
+  authorize(actor, projectId, "design.view");
+  const panels = projectPanels(projectId);
+  return getDb()
+    .select()
+    .from(room)
+    .where(eq(room.projectId, projectId))
+    .orderBy(asc(room.name))
+    .all()
+    .map((row) => {
+      const v = view(row, storedFields(row), panels);
+      const mean = v.check.ok && v.check.mean ? v.check.mean : null;
+      return {
+        id: v.id,
+        name: v.name,
+        use: v.use,
+        volumeM3: v.volumeM3,
+        version: v.version,
+        updatedAt: v.updatedAt,
+        target: v.targetResolved?.label ?? null,
+        mean: mean ? { before: mean.before, after: mean.after, low: mean.low, high: mean.high, status: mean.status } : null,
+        treatedArea: v.treatments.reduce((sum, t) => sum + t.area, 0),
+      };
+    });
+}
+
+export function getRoom(actor: Actor | null, projectId: string, roomId: string): RoomView {
+  authorize(actor, projectId, "design.view");
+  const row = loadRoom(projectId, roomId);
+  return view(row, storedFields(row), projectPanels(projectId));
+}
+
+function validated(projectId: string, fields: RoomFields): { surfaces: Surface[]; panels: Map<string, PanelAlpha> } {
+  const panels = projectPanels(projectId);
+  const surfaces = surfacesFor(fields);
+  const errors = roomIssues(fields, surfaces, panels, materialLookup(projectId)).filter((i) => i.severity === "error");
+  if (errors.length) throw invalid(errors.map((e) => ({ field: e.field, message: e.message })));
+  return { surfaces, panels };
+}
+
+function roomColumns(fields: RoomFields) {
+  const shoebox = fields.shape === "shoebox";
+  return {
+    name: fields.name,
+    use: fields.use,
+    shape: fields.shape,
+    length: shoebox ? fields.length : null,
+    width: shoebox ? fields.width : null,
+    height: shoebox ? fields.height : null,
+    volume: roomVolume(geometryOf(fields)),
+    temperature: fields.temperature,
+    humidity: fields.humidity,
+    pressure: fields.pressure,
+    target: fields.target ? JSON.stringify(fields.target) : null,
+  };
+}
+
+// Surfaces are kept by key (so their ids, and what hangs on them later, survive); openings
+// and treatments are written anew with the room.
+function writeChildren(tx: Tx, roomId: string, surfaces: Surface[], treatments: RoomFields["treatments"]) {
+  const existing = new Map(tx.select().from(surface).where(eq(surface.roomId, roomId)).all().map((s) => [s.key, s]));
+  const keep = new Set(surfaces.map((s) => s.key));
+  for (const [key, row] of existing) if (!keep.has(key)) tx.delete(surface).where(eq(surface.id, row.id)).run();
+  surfaces.forEach((s, position) => {
+    const values = { key: s.key, name: s.name, kind: s.kind, width: s.width, height: s.height, finish: s.finish, position };
+    const row = existing.get(s.key);
+    const id = row
+      ? (tx.update(surface).set(values).where(eq(surface.id, row.id)).run(), row.id)
+      : tx.insert(surface).values({ roomId, ...values }).returning({ id: surface.id }).get().id;
+    tx.delete(opening).where(eq(opening.surfaceId, id)).run();
+    s.openings.forEach((o, i) =>
+      tx.insert(opening).values({ surfaceId: id, kind: o.kind, name: o.name ?? "", x: o.x, y: o.y, width: o.width, height: o.height, material: o.material, position: i }).run(),
+    );
+  });
+  tx.delete(treatment).where(eq(treatment.roomId, roomId)).run();
+  for (const t of treatments) tx.insert(treatment).values({ roomId, surfaceKey: t.surfaceKey, buildUpId: t.buildUpId, area: t.area }).run();
+}
+
+export function createRoom(actor: Actor | null, projectId: string, raw: unknown): RoomView {
+  const access = authorize(actor, projectId, "design.edit");
+  const fields = parseInput(createRoomSchema, raw);
+  const { surfaces, panels } = validated(projectId, fields);
+  const row = transaction((tx) => {
+    const row = tx.insert(room).values({ projectId, ...roomColumns(fields) }).returning().get();
+    writeChildren(tx, row.id, surfaces, fields.treatments);
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "room.created", subjectId: row.id, detail: { name: row.name } });
+    return row;
+  });
+  return view(row, storedFields(row), panels);
+}
+
+export function updateRoom(actor: Actor | null, projectId: string, roomId: string, raw: unknown): RoomView {
+  const access = authorize(actor, projectId, "design.edit");
+  const current = loadRoom(projectId, roomId);
+  const input = parseInput(updateRoomSchema, raw);
+  const { version, ...fields } = input;
+  const { surfaces, panels } = validated(projectId, fields);
+  const row = transaction((tx) => {
+    // Only the version the editor started from may be replaced, so two editors never
+    // silently overwrite each other; a stale save changes nothing.
+    const updated = tx
+      .update(room)
+      .set({ ...roomColumns(fields), version: version + 1 })
+      .where(and(eq(room.id, roomId), eq(room.version, version)))
+      .returning()
+      .get();
+    if (!updated) {
+      throw conflict(`"${current.name}" was changed by someone else since you opened it (now version ${current.version}). Reload it to see their changes; nothing of yours was saved.`, "version");
+    }
+    writeChildren(tx, roomId, surfaces, fields.treatments);
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "room.updated", subjectId: roomId, detail: { version: updated.version } });
+    return updated;
+  });
+  return view(row, storedFields(row), panels);
+}
+
+export function deleteRoom(actor: Actor | null, projectId: string, roomId: string): { id: string; deleted: true } {
+  const access = authorize(actor, projectId, "design.edit");
+  const current = loadRoom(projectId, roomId);
+  transaction((tx) => {
+    tx.delete(room).where(eq(room.id, roomId)).run();
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "room.deleted", subjectId: roomId, detail: { name: current.name } });
+  });
+  return { id: roomId, deleted: true };
+}
