@@ -25,6 +25,10 @@ export function MeasureField({ label, metres, units, onChange, range, error, tes
   const [parseError, setParseError] = useState<string | null>(null);
   const focused = useRef(false);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  // The pending commit must reach the latest onChange (and so the latest draft), not the one
+  // of the render in which the key was pressed, or a quick edit elsewhere would be undone.
+  const latest = useRef({ onChange, metres });
+  latest.current = { onChange, metres };
 
   useEffect(() => {
     if (!focused.current) setText(formatLength(metres, units, { small }));
@@ -33,14 +37,19 @@ export function MeasureField({ label, metres, units, onChange, range, error, tes
   useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
 
   function commit(value: string) {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
     const parsed = parseLength(value);
     if (!parsed.ok) {
       setParseError(parsed.message);
       return;
     }
     setParseError(null);
-    if (parsed.metres !== metres) onChange(parsed.metres);
+    if (parsed.metres !== latest.current.metres) latest.current.onChange(parsed.metres);
   }
+
+  const commitRef = useRef(commit);
+  commitRef.current = commit;
 
   const shown = parseError ?? error;
   return (
@@ -62,7 +71,7 @@ export function MeasureField({ label, metres, units, onChange, range, error, tes
           const value = e.target.value;
           setText(value);
           if (timer.current) clearTimeout(timer.current);
-          timer.current = setTimeout(() => commit(value), 150);
+          timer.current = setTimeout(() => commitRef.current(value), 150);
         }}
         className={`figures w-full min-w-0 rounded-sheet border bg-white/70 px-2.5 py-1.5 text-sm focus:border-copper focus:outline-none ${shown ? "border-fault" : "border-paper-edge"}`}
       />
