@@ -1,6 +1,7 @@
 /**
- * Cavitas's acoustics engine: pure TypeScript, no framework, no database. See CONTRACT.md for
- * the calculation contract and REFERENCES.md section 0 for the model variants.
+ * Cavitas's acoustics engine: pure TypeScript, no framework, no database. The README's
+ * "Calculation contract" section documents the contract; REFERENCES.md section 0 fixes the
+ * model variants implemented here.
  */
 export * from "./air";
 export * from "./air-absorption";
