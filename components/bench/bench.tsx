@@ -9,7 +9,7 @@ import { ApiError } from "@/lib/queries/api";
 import type { UnitPreference } from "@/lib/units";
 import { AbsorptionChart, ChartLegend, type Curve } from "@/components/charts/absorption-chart";
 import { Button } from "@/components/ui/button";
-import { Notice } from "@/components/ui/notice";
+import { SaveNotices } from "@/components/ui/save-notices";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
 import { SelectField, TextField } from "@/components/ui/field";
 import { BuildUpInputs, type Draft } from "./build-up-inputs";
@@ -97,22 +97,7 @@ export function Bench({ initial, units, mayEdit }: { initial: BuildUpView; units
           ) : undefined
         }
       />
-      {conflict && (
-        <div className="mb-6">
-          <Notice tone="caution" title="Someone else saved this build-up">
-            {conflict}{" "}
-            <button type="button" className="font-semibold underline" onClick={reload}>
-              Reload their version
-            </button>{" "}
-            (your unsaved changes on this screen will be replaced).
-          </Notice>
-        </div>
-      )}
-      {serverError && serverError.status !== 409 && (
-        <div className="mb-6">
-          <Notice tone="fault">{serverError.message}</Notice>
-        </div>
-      )}
+      <SaveNotices what="build-up" conflict={conflict} onReload={reload} error={serverError} />
       <div className="grid gap-8 lg:grid-cols-[300px_1fr]">
         <fieldset disabled={!mayEdit} className="flex flex-col gap-6">
           <TextField label="Name" name="name" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} error={serverError?.fieldMessage("name")} />

@@ -14,6 +14,7 @@ import { ROOM_USE_WORDS } from "@/lib/room-uses";
 import { formatVolume, type UnitPreference } from "@/lib/units";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { SaveNotices } from "@/components/ui/save-notices";
 import { TitleBlock } from "@/components/ui/sheet";
 import { CheckPanel } from "./check-panel";
 import { RoomFieldsEditor } from "./room-fields-editor";
@@ -94,31 +95,7 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
           ) : undefined
         }
       />
-      {conflict && (
-        <div className="mb-6">
-          <Notice tone="caution" title="Someone else saved this room">
-            {conflict}{" "}
-            <button type="button" className="font-semibold underline" onClick={reload}>
-              Reload their version
-            </button>
-          </Notice>
-        </div>
-      )}
-      {serverError && serverError.status !== 409 && (
-        <div className="mb-6">
-          <Notice tone="fault" title={serverError.message}>
-            {serverError.issues.length > 0 && (
-              <ul className="list-disc pl-5">
-                {serverError.issues.map((i) => (
-                  <li key={i.field}>
-                    {i.field}: {i.message}
-                  </li>
-                ))}
-              </ul>
-            )}
-          </Notice>
-        </div>
-      )}
+      <SaveNotices what="room" conflict={conflict} onReload={reload} error={serverError} />
       {live ? (
         <CheckPanel check={live.check} target={live.target} />
       ) : (

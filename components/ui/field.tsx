@@ -2,14 +2,31 @@ import type { InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react
 
 type Common = { label: string; name: string; error?: string; hint?: ReactNode };
 
+function FieldLabel({ id, label }: { id: string; label: string }) {
+  return (
+    <label htmlFor={id} className="text-xs font-semibold uppercase tracking-wider text-ink-soft">
+      {label}
+    </label>
+  );
+}
+
+function FieldNote({ id, error, hint }: { id: string; error?: string; hint?: ReactNode }) {
+  if (error) {
+    return (
+      <p id={`${id}-error`} role="alert" className="text-xs font-medium text-fault">
+        {error}
+      </p>
+    );
+  }
+  return hint ? <p className="text-xs text-ink-faint">{hint}</p> : null;
+}
+
 // A labelled input whose error is shown at the field and announced to assistive tech.
 export function TextField({ label, name, error, hint, className = "", ...rest }: Common & InputHTMLAttributes<HTMLInputElement>) {
   const id = rest.id ?? `f-${name}`;
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
-      <label htmlFor={id} className="text-xs font-semibold uppercase tracking-wider text-ink-soft">
-        {label}
-      </label>
+      <FieldLabel id={id} label={label} />
       <input
         id={id}
         name={name}
@@ -18,12 +35,7 @@ export function TextField({ label, name, error, hint, className = "", ...rest }:
         {...rest}
         className={`rounded-sheet border bg-white/70 px-3 py-2 text-sm text-ink placeholder:text-ink-faint focus:border-copper focus:outline-none ${error ? "border-fault" : "border-paper-edge"}`}
       />
-      {hint && !error && <p className="text-xs text-ink-faint">{hint}</p>}
-      {error && (
-        <p id={`${id}-error`} role="alert" className="text-xs font-medium text-fault">
-          {error}
-        </p>
-      )}
+      <FieldNote id={id} error={error} hint={hint} />
     </div>
   );
 }
@@ -40,9 +52,7 @@ export function SelectField({
   const id = rest.id ?? `f-${name}`;
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
-      <label htmlFor={id} className="text-xs font-semibold uppercase tracking-wider text-ink-soft">
-        {label}
-      </label>
+      <FieldLabel id={id} label={label} />
       <select
         id={id}
         name={name}
@@ -56,12 +66,7 @@ export function SelectField({
           </option>
         ))}
       </select>
-      {hint && !error && <p className="text-xs text-ink-faint">{hint}</p>}
-      {error && (
-        <p role="alert" className="text-xs font-medium text-fault">
-          {error}
-        </p>
-      )}
+      <FieldNote id={id} error={error} hint={hint} />
     </div>
   );
 }
