@@ -1,8 +1,10 @@
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { hashPassword } from "better-auth/crypto";
 import type { Db } from "./client";
 import { shoeboxSurfaces } from "../lib/rooms/geometry";
-import { account, buildUp, firm, membership, opening, project, room, surface, treatment, user, type ProjectRole, type RoomUse } from "./schema";
+import { makeArray } from "../lib/board/arrays";
+import { formatCode } from "../lib/board/labels";
+import { account, board, buildUp, firm, membership, opening, pin, pinReply, placement, project, room, surface, treatment, user, type ProjectRole, type RoomUse } from "./schema";
 
 // The demo scenario. Everything here is FICTIONAL: the firms, the people, the arts centre
 // and its rooms are invented for the demo and resemble no real organisation or person.
@@ -53,6 +55,9 @@ type DemoRoom = {
   finishes: Record<string, string>;
   openings: Record<string, DemoOpening[]>;
   treatments: { surface: string; buildUp: string; area: number }[];
+  /** panels laid out on an elevation board: an array of one build-up's modules */
+  layouts?: { surface: string; buildUp: string; origin: { x: number; y: number }; columns: number; rows: number; gap: number }[];
+  pins?: { surface: string; x: number; y: number; by: Key; body: string; replies?: { by: Key; body: string }[]; resolvedBy?: Key }[];
 };
 
 const ARTS_ROOMS: DemoRoom[] = [
@@ -71,9 +76,21 @@ const ARTS_ROOMS: DemoRoom[] = [
       ],
     },
     treatments: [
-      { surface: "wall-a", buildUp: "Bass panel, rehearsal room", area: 21.6 },
       { surface: "wall-c", buildUp: "Bass panel, rehearsal room", area: 14.4 },
       { surface: "ceiling", buildUp: "Ceiling raft, café", area: 30 },
+    ],
+    layouts: [{ surface: "wall-a", buildUp: "Bass panel, rehearsal room", origin: { x: 0.55, y: 0.9 }, columns: 15, rows: 2, gap: 0.1 }],
+    pins: [
+      { surface: "wall-a", x: 6.2, y: 3.7, by: "architect", body: "Fire alarm sounder at 3.6 m here: keep 300 mm clear around it." },
+      {
+        surface: "wall-a",
+        x: 1.0,
+        y: 0.6,
+        by: "architect",
+        body: "Can the bottom row start above the skirting heater?",
+        replies: [{ by: "consultant", body: "Yes: the array starts at 900 mm, clear of the heater." }],
+        resolvedBy: "consultant",
+      },
     ],
   },
   {
@@ -88,10 +105,11 @@ const ARTS_ROOMS: DemoRoom[] = [
       "wall-b": [{ kind: "door", name: "Door to corridor", x: 0.6, y: 0, width: 1, height: 2.1, material: "timber-door" }],
     },
     treatments: [
-      { surface: "wall-c", buildUp: "Slotted speech panel, lecture room", area: 24 },
       { surface: "wall-d", buildUp: "Slotted speech panel, lecture room", area: 14.4 },
       { surface: "ceiling", buildUp: "Ceiling raft, café", area: 40 },
     ],
+    layouts: [{ surface: "wall-c", buildUp: "Slotted speech panel, lecture room", origin: { x: 0.6, y: 0.4 }, columns: 16, rows: 1, gap: 0.2 }],
+    pins: [{ surface: "wall-c", x: 4.5, y: 2.95, by: "architect", body: "Align the panel tops with the window head opposite (2.5 m)?" }],
   },
   {
     name: "Café",
@@ -104,10 +122,9 @@ const ARTS_ROOMS: DemoRoom[] = [
       "wall-a": [{ kind: "glazing", name: "Shop front", x: 1, y: 0.2, width: 16, height: 2.6, material: "glass-large-pane" }],
       "wall-b": [{ kind: "door", name: "Door to kitchen", x: 8, y: 0, width: 1, height: 2.1, material: "timber-door" }],
     },
-    treatments: [
-      { surface: "ceiling", buildUp: "Ceiling raft, café", area: 90 },
-      { surface: "wall-c", buildUp: "Slotted speech panel, lecture room", area: 20 },
-    ],
+    treatments: [{ surface: "wall-c", buildUp: "Slotted speech panel, lecture room", area: 20 }],
+    layouts: [{ surface: "ceiling", buildUp: "Ceiling raft, café", origin: { x: 0.9, y: 1.0 }, columns: 10, rows: 6, gap: 0.4 }],
+    pins: [{ surface: "ceiling", x: 9, y: 5.6, by: "architect", body: "Sprinkler heads on a 3 m grid here; rafts must not cover them." }],
   },
 ];
 
@@ -231,6 +248,29 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         for (const t of r.treatments) {
           tx.insert(treatment).values({ roomId: made.id, surfaceKey: t.surface, buildUpId: buildUpIds.get(t.buildUp)!, area: t.area }).run();
         }
+        const boardOf = new Map<string, string>();
+        const boardFor = (key: string) => {
+          if (!boardOf.has(key)) {
+            const s = tx.select({ id: surface.id }).from(surface).where(and(eq(surface.roomId, made.id), eq(surface.key, key))).get()!;
+            boardOf.set(key, tx.insert(board).values({ surfaceId: s.id, version: 1 }).returning().get().id);
+          }
+          return boardOf.get(key)!;
+        };
+        for (const l of r.layouts ?? []) {
+          const spec = ARTS_BUILD_UPS.find((b) => b.name === l.buildUp)!;
+          const rects = makeArray({ origin: l.origin, width: spec.moduleWidth, height: spec.moduleHeight, columns: l.columns, rows: l.rows, gapX: l.gap, gapY: l.gap });
+          rects.forEach((rect, i) =>
+            tx.insert(placement).values({ boardId: boardFor(l.surface), buildUpId: buildUpIds.get(l.buildUp)!, code: formatCode(i + 1), ...rect, position: i }).run(),
+          );
+        }
+        (r.pins ?? []).forEach((p, i) => {
+          const made_ = tx
+            .insert(pin)
+            .values({ boardId: boardFor(p.surface), number: i + 1, x: p.x, y: p.y, body: p.body, authorId: ids[p.by], resolvedAt: p.resolvedBy ? new Date() : null, resolvedBy: p.resolvedBy ? ids[p.resolvedBy] : null })
+            .returning()
+            .get();
+          for (const reply of p.replies ?? []) tx.insert(pinReply).values({ pinId: made_.id, body: reply.body, authorId: ids[reply.by] }).run();
+        });
       }
     }
   });

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import type { ProjectOverview } from "@/lib/services/projects";
 import { projectQuery } from "@/lib/queries/projects";
@@ -32,7 +33,14 @@ export function ProjectOverviewView({ initial, units }: { initial: ProjectOvervi
       <div className="grid gap-8 lg:grid-cols-[1.5fr_1fr]">
         <div className="flex flex-col gap-8">
           {rooms ? (
-            <Sheet title="Rooms" aside={<span className="figures text-xs text-ink-faint">{rooms.length}</span>}>
+            <Sheet
+              title="Rooms"
+              aside={
+                <span className="figures text-xs text-ink-faint" data-testid="project-open-pins">
+                  {rooms.length} · {data.openPins ?? 0} open {data.openPins === 1 ? "pin" : "pins"}
+                </span>
+              }
+            >
               {rooms.length === 0 ? (
                 <p className="text-sm text-ink-soft">No rooms yet.</p>
               ) : (
@@ -48,7 +56,11 @@ export function ProjectOverviewView({ initial, units }: { initial: ProjectOvervi
                   <tbody>
                     {rooms.map((r) => (
                       <tr key={r.id} className="border-b border-ink/10">
-                        <td className="py-2.5 pr-3 font-medium">{r.name}</td>
+                        <td className="py-2.5 pr-3 font-medium">
+                          <Link href={`/projects/${project.id}/rooms/${r.id}`} className="underline-offset-4 hover:text-copper-deep hover:underline">
+                            {r.name}
+                          </Link>
+                        </td>
                         <td className="py-2.5 pr-3 text-ink-soft">{ROOM_USE_WORDS[r.use as RoomUse] ?? r.use}</td>
                         <td className="figures py-2.5 pr-3 text-right">
                           {r.length && r.width && r.height

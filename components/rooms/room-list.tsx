@@ -41,7 +41,8 @@ export function RoomList({ projectId, initial, mayEdit, units }: { projectId: st
               <th className="py-2 pr-3 text-right font-semibold">Volume</th>
               <th className="py-2 pr-3 font-semibold">Target</th>
               <th className="py-2 pr-3 text-right font-semibold">Mid-frequency T, before → after</th>
-              <th className="py-2 font-semibold">Standing</th>
+              <th className="py-2 pr-3 font-semibold">Standing</th>
+              <th className="py-2 text-right font-semibold">Open pins</th>
             </tr>
           </thead>
           <tbody>
@@ -59,7 +60,8 @@ export function RoomList({ projectId, initial, mayEdit, units }: { projectId: st
                   {r.mean ? `${seconds(r.mean.before)} → ${seconds(r.mean.after)}` : "—"}
                   {r.mean?.high !== null && r.mean?.high !== undefined && <span className="text-ink-faint"> (≤ {r.mean.high.toFixed(2)} s)</span>}
                 </td>
-                <td className="py-2.5">{r.mean ? <StatusBadge status={r.mean.status} /> : <StatusBadge status="no target" />}</td>
+                <td className="py-2.5 pr-3">{r.mean ? <StatusBadge status={r.mean.status} /> : <StatusBadge status="no target" />}</td>
+                <td className={`figures py-2.5 text-right ${r.openPins ? "text-copper-deep" : "text-ink-faint"}`}>{r.openPins}</td>
               </tr>
             ))}
           </tbody>

@@ -11,7 +11,8 @@ import { octaveAlphaFromBands } from "@/lib/rooms/octaves";
 import { roomQuery, useSaveRoom } from "@/lib/queries/rooms";
 import { ApiError } from "@/lib/queries/api";
 import { ROOM_USE_WORDS } from "@/lib/room-uses";
-import { formatVolume, type UnitPreference } from "@/lib/units";
+import { formatArea, formatVolume, type UnitPreference } from "@/lib/units";
+import Link from "next/link";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { SaveNotices } from "@/components/ui/save-notices";
@@ -22,7 +23,7 @@ import { SurfacesEditor } from "./surfaces-editor";
 import { TreatmentsEditor } from "./treatments-editor";
 
 function fieldsOf(room: RoomView): RoomFields {
-  const { id: _i, projectId: _p, version: _v, updatedAt: _u, volumeM3: _vol, targetResolved: _t, check: _c, warnings: _w, surfaces, ...rest } = room;
+  const { id: _i, projectId: _p, version: _v, updatedAt: _u, volumeM3: _vol, targetResolved: _t, check: _c, warnings: _w, placed: _pl, openPins: _op, surfaces, ...rest } = room;
   return { ...rest, surfaces: surfaces.map(({ grossArea: _g, netArea: _n, ...s }) => s) };
 }
 
@@ -46,10 +47,13 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
   const issues = useMemo(() => roomIssues(draft, surfaces, panels, lookup), [draft, surfaces, panels, lookup]);
   const errors = issues.filter((i) => i.severity === "error");
   const live = useMemo(
-    () => (errors.length ? null : runCheck({ fields: draft, surfaces, treatments: draft.treatments, panels, lookup })),
-    [draft, surfaces, panels, lookup, errors.length],
+    () => (errors.length ? null : runCheck({ fields: draft, surfaces, treatments: [...draft.treatments, ...saved.placed], panels, lookup })),
+    [draft, surfaces, panels, lookup, errors.length, saved.placed],
   );
-  const checkInput = useMemo(() => (errors.length ? null : checkInputFor({ fields: draft, surfaces, treatments: draft.treatments, panels, lookup }).input), [draft, surfaces, panels, lookup, errors.length]);
+  const checkInput = useMemo(
+    () => (errors.length ? null : checkInputFor({ fields: draft, surfaces, treatments: [...draft.treatments, ...saved.placed], panels, lookup }).input),
+    [draft, surfaces, panels, lookup, errors.length, saved.placed],
+  );
 
   const serverError = save.error instanceof ApiError ? save.error : null;
   const fieldError = (field: string) => errors.find((e) => e.field === field)?.message ?? serverError?.fieldMessage(field);
@@ -96,6 +100,19 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
         }
       />
       <SaveNotices what="room" conflict={conflict} onReload={reload} error={serverError} />
+      <nav aria-label="Elevation boards" className="mb-6 flex flex-wrap items-center gap-2 text-xs" data-testid="board-links">
+        <span className="font-semibold uppercase tracking-wider text-ink-soft">Boards</span>
+        {saved.surfaces.map((s) => {
+          const area = saved.placed.filter((l) => l.surfaceKey === s.key).reduce((a, l) => a + l.area, 0);
+          return (
+            <Link key={s.key} href={`/projects/${saved.projectId}/rooms/${saved.id}/board/${s.key}`} className="rounded-sheet border border-ink/25 bg-white/60 px-2 py-1 hover:border-copper hover:text-copper-deep">
+              {s.name}
+              {area > 0 && <span className="figures ml-1 text-ink-faint">{formatArea(area, units)}</span>}
+            </Link>
+          );
+        })}
+        {saved.openPins > 0 && <span className="ml-2 text-copper-deep">{saved.openPins} open {saved.openPins === 1 ? "pin" : "pins"}</span>}
+      </nav>
       {live ? (
         <CheckPanel check={live.check} target={live.target} />
       ) : (

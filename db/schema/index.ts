@@ -9,3 +9,4 @@ export * from "./attachment";
 export * from "./material";
 export * from "./surface";
 export * from "./build-up";
+export * from "./board";

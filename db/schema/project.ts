@@ -1,4 +1,4 @@
-import { sqliteTable, text, uniqueIndex, index } from "drizzle-orm/sqlite-core";
+import { real, sqliteTable, text, uniqueIndex, index } from "drizzle-orm/sqlite-core";
 import { createdAt, id, updatedAt } from "./columns";
 import { firm } from "./firm";
 import { user } from "./auth";
@@ -15,6 +15,8 @@ export const project = sqliteTable("project", {
   name: text("name").notNull(),
   reference: text("reference"),
   site: text("site"),
+  // Least distance from a panel to a surface edge or an opening, m (elevation board rule).
+  edgeClearance: real("edge_clearance").notNull().default(0.05),
   createdBy: text("created_by").references(() => user.id, { onDelete: "set null" }),
   createdAt: createdAt(),
   updatedAt: updatedAt(),

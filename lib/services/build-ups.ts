@@ -1,6 +1,6 @@
 import { and, asc, eq } from "drizzle-orm";
 import { getDb, transaction } from "@/db/client";
-import { attachment, buildUp, treatment, type BuildUp } from "@/db/schema";
+import { attachment, buildUp, placement, treatment, type BuildUp } from "@/db/schema";
 import { runEvaluate, type EvaluateInput, type EvaluateOutput } from "@/lib/acoustics/contract";
 import { conflict, notFound } from "@/lib/errors";
 import { parseInput } from "@/lib/schemas/parse";
@@ -117,6 +117,8 @@ export function deleteBuildUp(actor: Actor | null, projectId: string, buildUpId:
   const current = load(projectId, buildUpId);
   const used = getDb().select({ id: treatment.id }).from(treatment).where(eq(treatment.buildUpId, buildUpId)).all().length;
   if (used > 0) throw conflict(`"${current.name}" is used by ${used} treated ${used === 1 ? "area" : "areas"}; remove those first.`);
+  const placed = getDb().select({ id: placement.id }).from(placement).where(eq(placement.buildUpId, buildUpId)).all().length;
+  if (placed > 0) throw conflict(`"${current.name}" is placed ${placed} ${placed === 1 ? "time" : "times"} on elevation boards; remove those panels first.`);
   transaction((tx) => {
     tx.delete(buildUp).where(eq(buildUp.id, buildUpId)).run();
     recordAudit(tx, { actorId: access.actor.userId, projectId, action: "build-up.deleted", subjectId: buildUpId, detail: { name: current.name } });

@@ -8,6 +8,7 @@ import type { Actor } from "./actor";
 import { authorize, requireActor, requireFirmMember } from "./guard";
 import { recordAudit } from "./audit";
 import { listOpenInvitations, type InvitationSummary } from "./invitations";
+import { openPinCounts } from "./boards";
 
 export type ProjectListItem = {
   id: string;
@@ -95,6 +96,8 @@ export type ProjectOverview = {
   team: TeamMember[];
   rooms: RoomSummary[] | null;
   invitations: InvitationSummary[] | null;
+  /** open review pins across the project's boards; null for roles that see no drafts */
+  openPins: number | null;
 };
 
 export function getProjectOverview(actor: Actor | null, projectId: string): ProjectOverview {
@@ -121,5 +124,6 @@ export function getProjectOverview(actor: Actor | null, projectId: string): Proj
     team: listTeam(actor, projectId),
     rooms,
     invitations: roleMay(role, "team.invite") ? listOpenInvitations(actor, projectId) : null,
+    openPins: roleMay(role, "design.view") ? [...openPinCounts(projectId).values()].reduce((a, n) => a + n, 0) : null,
   };
 }

@@ -12,6 +12,7 @@ import type { Actor } from "./actor";
 import { authorize } from "./guard";
 import { recordAudit } from "./audit";
 import { materialLookup } from "./materials";
+import { openPinCounts, placedAreas } from "./boards";
 import { fieldsFromRows, geometryOf, panelAlphaOf, roomIssues, runCheck, surfacesFor, type PanelAlpha } from "@/lib/room-model";
 
 export type RoomView = Omit<RoomFields, "surfaces"> & {
@@ -25,12 +26,16 @@ export type RoomView = Omit<RoomFields, "surfaces"> & {
   targetResolved: Target | null;
   check: CheckResult;
   warnings: Issue[];
+  /** panel area placed on the elevation boards, per surface and build-up */
+  placed: { surfaceKey: string; buildUpId: string; area: number }[];
+  openPins: number;
 };
 
 export type RoomSummary = Pick<RoomView, "id" | "name" | "use" | "volumeM3" | "version" | "updatedAt"> & {
   target: string | null;
   mean: { before: number | null; after: number | null; low: number | null; high: number | null; status: string } | null;
   treatedArea: number;
+  openPins: number;
 };
 
 // Each build-up of the project evaluated once per request, for every room that uses it.
@@ -56,9 +61,11 @@ function storedFields(row: Room): RoomFields {
   return fieldsFromRows(row, surfaces, openings, treatments);
 }
 
-function view(row: Room, fields: RoomFields, panels: Map<string, PanelAlpha>): RoomView {
+function view(row: Room, fields: RoomFields, panels: Map<string, PanelAlpha>, pins = openPinCounts(row.projectId)): RoomView {
   const surfaces = surfacesFor(fields);
-  const { check, target, issues } = runCheck({ fields, surfaces, treatments: fields.treatments, panels, lookup: materialLookup(row.projectId) });
+  const placed = placedAreas(row.id);
+  // The check counts both: treatment entered by area, and panels placed on the boards.
+  const { check, target, issues } = runCheck({ fields, surfaces, treatments: [...fields.treatments, ...placed], panels, lookup: materialLookup(row.projectId) });
   return {
     ...fields,
     id: row.id,
@@ -69,6 +76,8 @@ function view(row: Room, fields: RoomFields, panels: Map<string, PanelAlpha>): R
     surfaces: surfaces.map((s) => ({ ...s, name: s.name, openings: s.openings.map((o) => ({ ...o, name: o.name ?? "" })), grossArea: grossArea(s), netArea: netArea(s) })),
     targetResolved: target,
     check,
+    placed,
+    openPins: pins.get(row.id) ?? 0,
     warnings: [...issues, ...(check.ok ? check.issues.filter((i) => i.severity === "warning") : [])],
   };
 }
@@ -76,6 +85,7 @@ function view(row: Room, fields: RoomFields, panels: Map<string, PanelAlpha>): R
 export function listRooms(actor: Actor | null, projectId: string): RoomSummary[] {
   authorize(actor, projectId, "design.view");
   const panels = projectPanels(projectId);
+  const pins = openPinCounts(projectId);
   return getDb()
     .select()
     .from(room)
@@ -83,7 +93,7 @@ export function listRooms(actor: Actor | null, projectId: string): RoomSummary[]
     .orderBy(asc(room.name))
     .all()
     .map((row) => {
-      const v = view(row, storedFields(row), panels);
+      const v = view(row, storedFields(row), panels, pins);
       const mean = v.check.ok && v.check.mean ? v.check.mean : null;
       return {
         id: v.id,
@@ -94,7 +104,8 @@ export function listRooms(actor: Actor | null, projectId: string): RoomSummary[]
         updatedAt: v.updatedAt,
         target: v.targetResolved?.label ?? null,
         mean: mean ? { before: mean.before, after: mean.after, low: mean.low, high: mean.high, status: mean.status } : null,
-        treatedArea: v.treatments.reduce((sum, t) => sum + t.area, 0),
+        treatedArea: [...v.treatments, ...v.placed].reduce((sum, t) => sum + t.area, 0),
+        openPins: v.openPins,
       };
     });
 }

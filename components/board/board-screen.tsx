@@ -1,0 +1,483 @@
+"use client";
+
+import dynamic from "next/dynamic";
+import Link from "next/link";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
+import type { BoardView } from "@/lib/services/boards";
+import type { RoomView } from "@/lib/services/rooms";
+import type { MaterialView } from "@/lib/services/materials";
+import type { BuildUpView } from "@/lib/services/build-ups";
+import type { Placement, Rect } from "@/lib/board/types";
+import { checkRules, rulesByPlacement } from "@/lib/board/rules";
+import { buildSnapIndex, type SnapIndex } from "@/lib/board/snap-index";
+import { snapMove, snapResize, type SnapGuide } from "@/lib/board/snap";
+import { resizeRect, type ResizeHandle } from "@/lib/board/resize";
+import { begin, cancel, canRedo, canUndo, commit, createHistory, push, redo, undo, type History } from "@/lib/board/history";
+import { addPlacements, moveBy, removePlacements, updatePlacement } from "@/lib/board/edits";
+import { duplicate, makeArray } from "@/lib/board/arrays";
+import { nextCode, nextCodes } from "@/lib/board/labels";
+import { cycleSelection, marqueeSelect, nudge } from "@/lib/board/selection";
+import { fitToView, panBy, zoomAt, type View } from "@/lib/board/view";
+import { treatedArea } from "@/lib/board/treated-area";
+import { runCheck, surfacesFor, type PanelAlpha } from "@/lib/room-model";
+import { octaveAlphaFromBands } from "@/lib/rooms/octaves";
+import { fetchBoard, usePinActions } from "@/lib/queries/boards";
+import type { UnitPreference } from "@/lib/units";
+import { Sheet, TitleBlock } from "@/components/ui/sheet";
+import { Notice } from "@/components/ui/notice";
+import type { CanvasMode } from "./board-canvas";
+import { LiveCheck } from "./live-check";
+import { PinsPanel } from "./pins-panel";
+import { RulesList } from "./rules-list";
+import { SelectionPanel } from "./selection-panel";
+import { Toolbar } from "./toolbar";
+import { DrawingPanel, useDrawingImage } from "./drawing-panel";
+import { useBoardSave } from "./use-board-save";
+
+const BoardCanvas = dynamic(() => import("./board-canvas"), { ssr: false, loading: () => <div className="h-full w-full animate-pulse bg-paper-deep" /> });
+
+type May = { edit: boolean; pin: boolean; resolve: boolean; drawing: boolean };
+type Props = { initial: BoardView; room: RoomView; materials: MaterialView[]; buildUps: BuildUpView[]; units: UnitPreference; may: May; focusPin: number | null };
+
+const CANVAS_HEIGHT = 600;
+const toPlacements = (b: BoardView): Placement[] => b.placements.map((p) => ({ ...p }));
+
+declare global {
+  interface Window {
+    __cavitasBoard?: { lastDragAt: number; checkAt: number; frames: number };
+  }
+}
+
+// The elevation board of one surface: the canvas in the middle, tools on the left, the
+// selected panel, the rules it breaks, the live check and the pins on the right.
+export function BoardScreen({ initial, room, materials, buildUps, units, may, focusPin }: Props) {
+  const [board, setBoard] = useState(initial);
+  const [history, setHistory] = useState<History<readonly Placement[]>>(() => createHistory<readonly Placement[]>(toPlacements(initial)));
+  const placements = history.present.state;
+  const [selected, setSelected] = useState<Set<string>>(new Set());
+  const [mode, setMode] = useState<CanvasMode>("select");
+  const [gridModule, setGridModule] = useState(initial.gridModule);
+  const [guides, setGuides] = useState<SnapGuide[]>([]);
+  const [live, setLive] = useState<{ id: string; rect: Rect } | null>(null);
+  const [pinFocus, setPinFocus] = useState<number | null>(focusPin);
+  const [draftPin, setDraftPin] = useState<{ x: number; y: number } | null>(null);
+  const [scalePoints, setScalePoints] = useState<{ x: number; y: number }[]>([]);
+  const [buildUpId, setBuildUpId] = useState(buildUps[0]?.id ?? "");
+  const wrap = useRef<HTMLDivElement>(null);
+  const [size, setSize] = useState({ width: 900, height: CANVAS_HEIGHT });
+  const surface = useMemo(() => room.surfaces.find((s) => s.key === initial.surfaceKey)!, [room.surfaces, initial.surfaceKey]);
+  const [view, setView] = useState<View>(() => fitToView(surface, size, 48));
+  const save = useBoardSave(initial, initial.version, may.edit);
+  const snapIndex = useRef<SnapIndex | null>(null);
+  const dragStart = useRef<Rect | null>(null);
+  const drawing = useDrawingImage(board.drawing?.url ?? null);
+  const pinActions = usePinActions(initial, async () => setBoard(await fetchBoard(initial)));
+
+  const boardSurface = useMemo(
+    () => ({ width: surface.width, height: surface.height, openings: surface.openings.map((o, i) => ({ ...o, id: `o${i}`, name: o.name || undefined })) }),
+    [surface],
+  );
+  const facings = useMemo(() => new Map(board.buildUps.map((b) => [b.id, b])), [board.buildUps]);
+  const codes = useMemo(() => new Map(placements.map((p) => [p.id, p.code ?? ""])), [placements]);
+
+  useLayoutEffect(() => {
+    const el = wrap.current;
+    if (!el) return;
+    const measure = () => setSize({ width: el.clientWidth, height: CANVAS_HEIGHT });
+    measure();
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+  // Fit the surface to the canvas until the person zooms or pans themselves.
+  const userMoved = useRef(false);
+  useEffect(() => {
+    if (!userMoved.current && size.width > 0) setView(fitToView(surface, size, 48));
+  }, [size, surface]);
+  const moveView = useCallback((f: (v: View) => View) => {
+    userMoved.current = true;
+    setView(f);
+  }, []);
+
+  // What the check and the rules see: the placements, with the one being dragged at its live spot.
+  const shown = useMemo(() => (live ? placements.map((p) => (p.id === live.id ? { ...p, ...live.rect } : p)) : placements), [placements, live]);
+  const breaks = useMemo(() => checkRules(boardSurface, shown, { clearance: board.clearance }), [boardSurface, shown, board.clearance]);
+  const breaksBy = useMemo(() => rulesByPlacement(breaks), [breaks]);
+
+  // The live check: the build-ups' band values are computed once; each frame only re-sums the room.
+  const panels = useMemo(() => new Map<string, PanelAlpha>(buildUps.map((b) => [b.id, { name: b.name, alpha: octaveAlphaFromBands(b.result.octaves) }])), [buildUps]);
+  const lookup = useMemo(() => {
+    const byKey = new Map(materials.map((m) => [m.key, m.alpha]));
+    return (key: string) => byKey.get(key);
+  }, [materials]);
+  const roomFields = useMemo(() => ({ ...room, surfaces: room.surfaces.map(({ grossArea: _g, netArea: _n, ...s }) => s) }), [room]);
+  const roomSurfaces = useMemo(() => surfacesFor(roomFields), [roomFields]);
+  const otherBoards = useMemo(() => room.placed.filter((l) => l.surfaceKey !== initial.surfaceKey), [room.placed, initial.surfaceKey]);
+  const check = useMemo(() => {
+    const mine = treatedArea([{ surfaceKey: initial.surfaceKey, placements: shown }]);
+    return runCheck({ fields: roomFields, surfaces: roomSurfaces, treatments: [...room.treatments, ...otherBoards, ...mine], panels, lookup }).check;
+  }, [shown, roomFields, roomSurfaces, room.treatments, otherBoards, panels, lookup, initial.surfaceKey]);
+  useLayoutEffect(() => {
+    if (typeof window !== "undefined") {
+      const stats = (window.__cavitasBoard ??= { lastDragAt: 0, checkAt: 0, frames: 0 });
+      stats.checkAt = performance.now();
+    }
+  }, [check]);
+
+  const change = useCallback(
+    (next: readonly Placement[], label: string) => {
+      setHistory((h) => push(h, next, label));
+      save.schedule(next, gridModule);
+    },
+    [save, gridModule],
+  );
+
+  // --- canvas callbacks ---------------------------------------------------------------
+  const tolerance = 8 / view.scale;
+  const onDragStart = useCallback(
+    (id: string) => {
+      const others = placements.filter((p) => p.id !== id);
+      snapIndex.current = buildSnapIndex(boardSurface, others);
+      const p = placements.find((x) => x.id === id)!;
+      dragStart.current = { x: p.x, y: p.y, width: p.width, height: p.height };
+      if (!selected.has(id)) setSelected(new Set([id]));
+      setHistory((h) => begin(h));
+    },
+    [placements, boardSurface, selected],
+  );
+  const onDragMove = useCallback(
+    (id: string, rect: Rect) => {
+      const stats = (window.__cavitasBoard ??= { lastDragAt: 0, checkAt: 0, frames: 0 });
+      stats.lastDragAt = performance.now();
+      stats.frames++;
+      const snapped = snapIndex.current ? snapMove(rect, snapIndex.current, { tolerance, module: gridModule }) : { rect, guides: [] };
+      setGuides(snapped.guides);
+      setLive({ id, rect: snapped.rect });
+      return snapped.rect;
+    },
+    [tolerance, gridModule],
+  );
+  const onDragEnd = useCallback(
+    (id: string, rect: Rect) => {
+      const start = dragStart.current;
+      const snapped = snapIndex.current ? snapMove(rect, snapIndex.current, { tolerance, module: gridModule }).rect : rect;
+      setGuides([]);
+      setLive(null);
+      if (!start) return;
+      const dx = snapped.x - start.x;
+      const dy = snapped.y - start.y;
+      const ids = selected.has(id) ? selected : new Set([id]);
+      const next = moveBy(placements, ids, dx, dy);
+      setHistory((h) => commit(push(h, next, `Move ${codes.get(id)}`)));
+      save.schedule(next, gridModule);
+    },
+    [placements, selected, tolerance, gridModule, codes, save],
+  );
+  const onResize = useCallback(
+    (id: string, handle: ResizeHandle, dx: number, dy: number, done: boolean) => {
+      const p = placements.find((x) => x.id === id);
+      if (!p) return null;
+      const index = buildSnapIndex(boardSurface, placements.filter((x) => x.id !== id));
+      const raw = resizeRect(p, handle, dx, dy, 0.05);
+      const rect = snapResize(raw, handle, index, { tolerance, module: gridModule, minSize: 0.05 }).rect;
+      if (done) {
+        setLive(null);
+        change(updatePlacement(placements, id, rect), `Resize ${p.code}`);
+      } else setLive({ id, rect });
+      return rect;
+    },
+    [placements, boardSurface, tolerance, gridModule, change],
+  );
+
+  function addPanel(rect?: Rect) {
+    const b = board.buildUps.find((x) => x.id === buildUpId);
+    if (!b) return;
+    const r = rect ?? { x: board.clearance, y: board.clearance, width: b.moduleWidth, height: b.moduleHeight };
+    const made: Placement = { id: crypto.randomUUID(), buildUpId, code: nextCode(placements.map((p) => p.code)), ...r };
+    change(addPlacements(placements, [made]), `Add ${made.code}`);
+    setSelected(new Set([made.id]));
+  }
+
+  function addArray(spec: { columns: number; rows: number; gapX: number; gapY: number }) {
+    const b = board.buildUps.find((x) => x.id === buildUpId);
+    if (!b) return;
+    const anchor = placements.find((p) => selected.has(p.id));
+    const origin = anchor ? { x: anchor.x, y: anchor.y } : { x: board.clearance, y: board.clearance };
+    const rects = makeArray({ origin, width: b.moduleWidth, height: b.moduleHeight, ...spec });
+    const codesNew = nextCodes(placements.map((p) => p.code), rects.length);
+    const made = rects.map((r, i) => ({ id: crypto.randomUUID(), buildUpId, code: codesNew[i], ...r }));
+    change(addPlacements(anchor ? removePlacements(placements, new Set([anchor.id])) : placements, made), `Add ${spec.columns} × ${spec.rows} array`);
+    setSelected(new Set(made.map((m) => m.id)));
+  }
+
+  // --- keyboard ----------------------------------------------------------------------
+  useEffect(() => {
+    function onKey(e: KeyboardEvent) {
+      const target = e.target as HTMLElement;
+      if (target.closest("input, textarea, select")) return;
+      const mod = e.ctrlKey || e.metaKey;
+      if (mod && e.key.toLowerCase() === "z") {
+        e.preventDefault();
+        setHistory((h) => {
+          const next = e.shiftKey ? redo(h) : undo(h);
+          save.schedule(next.present.state, gridModule);
+          return next;
+        });
+        return;
+      }
+      if (mod && e.key.toLowerCase() === "y") {
+        e.preventDefault();
+        setHistory((h) => {
+          const next = redo(h);
+          save.schedule(next.present.state, gridModule);
+          return next;
+        });
+        return;
+      }
+      if (mod && e.key.toLowerCase() === "a") {
+        e.preventDefault();
+        setSelected(new Set(placements.map((p) => p.id)));
+        return;
+      }
+      if (e.key === "Escape") {
+        setSelected(new Set());
+        setMode("select");
+        setDraftPin(null);
+        setHistory((h) => cancel(h));
+        return;
+      }
+      if (e.key === "Tab" && placements.length) {
+        e.preventDefault();
+        const current = [...selected][0] ?? null;
+        const next = cycleSelection(placements, current, e.shiftKey ? -1 : 1);
+        setSelected(new Set(next ? [next] : []));
+        return;
+      }
+      if (!may.edit || selected.size === 0) return;
+      if (e.key === "Delete" || e.key === "Backspace") {
+        e.preventDefault();
+        change(removePlacements(placements, selected), `Delete ${selected.size}`);
+        setSelected(new Set());
+        return;
+      }
+      if (mod && e.key.toLowerCase() === "d") {
+        e.preventDefault();
+        const made = duplicate(placements.filter((p) => selected.has(p.id)), { x: gridModule, y: 0 }, { taken: placements });
+        change(addPlacements(placements, made), `Duplicate ${made.length}`);
+        setSelected(new Set(made.map((m) => m.id)));
+        return;
+      }
+      if (e.key.startsWith("Arrow")) {
+        e.preventDefault();
+        const next = nudge(placements, selected, e.key, e.shiftKey, { step: 0.01, largeStep: gridModule });
+        change(next, "Nudge");
+      }
+    }
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [placements, selected, may.edit, change, gridModule, save]);
+
+  async function reload() {
+    const fresh = await fetchBoard(initial);
+    setBoard(fresh);
+    setHistory(createHistory<readonly Placement[]>(toPlacements(fresh)));
+    setSelected(new Set());
+    save.reset(fresh.version);
+  }
+
+  const selectedList = placements.filter((p) => selected.has(p.id));
+  const surfaceLinks = room.surfaces.map((s) => ({ key: s.key, name: s.name }));
+  const openPins = board.pins.filter((p) => !p.resolved).length;
+
+  return (
+    <>
+      <TitleBlock
+        kicker={`Board · ${room.name}`}
+        title={surface.name}
+        meta={
+          <span className="flex flex-wrap items-center gap-3">
+            <span data-testid="board-save-state">
+              {save.state === "saved" && `saved, version ${save.version}`}
+              {save.state === "pending" && "changes waiting to be saved"}
+              {save.state === "saving" && "saving…"}
+              {save.state === "conflict" && "not saved: someone else changed this board"}
+              {save.state === "error" && "not saved yet"}
+            </span>
+            <span>· {placements.length} panels</span>
+            <span>· {openPins} open {openPins === 1 ? "pin" : "pins"}</span>
+            {!may.edit && <span>· you may pin, not move panels</span>}
+          </span>
+        }
+        actions={
+          <nav className="flex flex-wrap gap-1 text-xs" aria-label="Surfaces">
+            {surfaceLinks.map((l) => (
+              <Link
+                key={l.key}
+                href={`/projects/${room.projectId}/rooms/${room.id}/board/${l.key}`}
+                className={`rounded-sheet border px-2 py-1 ${l.key === initial.surfaceKey ? "border-copper bg-copper-soft/40 text-ink" : "border-ink/20 text-ink-soft hover:text-ink"}`}
+              >
+                {l.name}
+              </Link>
+            ))}
+          </nav>
+        }
+      />
+      {save.state === "conflict" && (
+        <div className="mb-4">
+          <Notice tone="caution" title="Someone else saved this board">
+            {save.message}{" "}
+            <button type="button" className="font-semibold underline" onClick={reload}>
+              Reload the board
+            </button>{" "}
+            (your unsaved changes on this screen will be replaced).
+          </Notice>
+        </div>
+      )}
+      {save.state === "error" && save.message && (
+        <div className="mb-4">
+          <Notice tone="fault">{save.message}</Notice>
+        </div>
+      )}
+      <div className="grid gap-5 xl:grid-cols-[220px_1fr_300px]">
+        <Toolbar
+          mode={mode}
+          setMode={setMode}
+          may={may}
+          buildUps={board.buildUps}
+          buildUpId={buildUpId}
+          setBuildUpId={setBuildUpId}
+          onAdd={() => addPanel()}
+          onArray={addArray}
+          gridModule={gridModule}
+          setGridModule={(m) => {
+            setGridModule(m);
+            save.schedule(placements, m);
+          }}
+          units={units}
+          canUndo={canUndo(history)}
+          canRedo={canRedo(history)}
+          onUndo={() => setHistory((h) => (save.schedule(undo(h).present.state, gridModule), undo(h)))}
+          onRedo={() => setHistory((h) => (save.schedule(redo(h).present.state, gridModule), redo(h)))}
+          onFit={() => {
+            userMoved.current = false;
+            setView(fitToView(surface, size, 48));
+          }}
+          onZoom={(f) => moveView((v) => zoomAt(v, f, { x: size.width / 2, y: size.height / 2 }))}
+        />
+        <div className="min-w-0">
+          <div ref={wrap} className="relative overflow-hidden rounded-sheet border border-ink/30 bg-paper-deep/40" style={{ height: CANVAS_HEIGHT }} data-testid="board-canvas">
+            <BoardCanvas
+              width={size.width}
+              height={size.height}
+              view={view}
+              surface={boardSurface}
+              gridModule={gridModule}
+              placements={placements}
+              selected={selected}
+              buildUps={facings}
+              breaks={breaksBy}
+              guides={guides}
+              pins={board.pins}
+              focusPin={pinFocus}
+              drawing={drawing && board.drawing ? { image: drawing, ...board.drawing } : null}
+              scalePoints={scalePoints}
+              mode={mode}
+              editable={may.edit}
+              onSelect={(ids, additive) => setSelected((cur) => (additive ? new Set([...cur, ...ids]) : new Set(ids)))}
+              onDragStart={onDragStart}
+              onDragMove={onDragMove}
+              onDragEnd={onDragEnd}
+              onResize={onResize}
+              onDrawn={(rect) => {
+                setMode("select");
+                addPanel(rect);
+              }}
+              onPinAt={(x, y) => setDraftPin({ x, y })}
+              onPinSelect={setPinFocus}
+              onScalePick={(x, y) => setScalePoints((pts) => (pts.length >= 2 ? [{ x, y }] : [...pts, { x, y }]))}
+              onZoom={(f, px, py) => moveView((v) => zoomAt(v, f, { x: px, y: py }))}
+              onPan={(dx, dy) => moveView((v) => panBy(v, dx, dy))}
+              onMarquee={(rect, additive) => {
+                const hit = marqueeSelect(placements, rect);
+                setSelected((cur) => (additive ? new Set([...cur, ...hit]) : hit));
+              }}
+            />
+            {draftPin && (
+              <PinComposer
+                onCancel={() => setDraftPin(null)}
+                onSubmit={async (body) => {
+                  const made = await pinActions.create.mutateAsync({ ...draftPin, body }).catch(() => null);
+                  if (made) {
+                    setDraftPin(null);
+                    setMode("select");
+                    setPinFocus(made.number);
+                  }
+                }}
+                error={pinActions.create.error?.message ?? null}
+              />
+            )}
+          </div>
+          <p className="mt-2 text-[11px] text-ink-faint">
+            Wheel to zoom, Alt-drag or middle button to pan, drag on empty board to select. Arrows nudge 10 mm (Shift: one grid module); Delete removes; Ctrl+D duplicates; Ctrl+Z / Ctrl+Shift+Z undo and redo; Tab steps through panels.
+          </p>
+          {may.drawing && (
+            <div className="mt-4">
+              <DrawingPanel board={board} scalePoints={scalePoints} setScalePoints={setScalePoints} mode={mode} setMode={setMode} units={units} onChanged={setBoard} surfaceWidth={surface.width} />
+            </div>
+          )}
+        </div>
+        <div className="flex flex-col gap-5">
+          <Sheet title="Selection">
+            <SelectionPanel
+              selected={selectedList}
+              units={units}
+              editable={may.edit}
+              buildUps={board.buildUps}
+              onChange={(id, fields) => change(updatePlacement(placements, id, fields), "Edit panel")}
+              onDelete={() => {
+                change(removePlacements(placements, selected), `Delete ${selected.size}`);
+                setSelected(new Set());
+              }}
+            />
+          </Sheet>
+          <Sheet title={`Rules (${breaks.length})`}>
+            <RulesList breaks={breaks} onPick={(ids) => setSelected(new Set(ids))} />
+          </Sheet>
+          <Sheet title="Check, live">
+            <LiveCheck check={check} />
+          </Sheet>
+          <Sheet title={`Pins (${openPins} open)`}>
+            <PinsPanel pins={board.pins} actions={pinActions} selected={pinFocus} onSelect={setPinFocus} may={may} />
+          </Sheet>
+        </div>
+      </div>
+    </>
+  );
+}
+
+function PinComposer({ onSubmit, onCancel, error }: { onSubmit: (body: string) => void; onCancel: () => void; error: string | null }) {
+  const [body, setBody] = useState("");
+  return (
+    <form
+      className="absolute bottom-3 left-3 right-3 flex flex-col gap-2 rounded-sheet border border-copper bg-paper p-3 shadow"
+      onSubmit={(e) => {
+        e.preventDefault();
+        onSubmit(body);
+      }}
+    >
+      <label htmlFor="pin-body" className="text-xs font-semibold uppercase tracking-wider text-ink-soft">
+        Comment at this point
+      </label>
+      <textarea id="pin-body" autoFocus rows={2} value={body} onChange={(e) => setBody(e.target.value)} className="rounded-sheet border border-paper-edge bg-white/80 px-2 py-1 text-sm" />
+      {error && <p className="text-xs text-fault">{error}</p>}
+      <div className="flex gap-3 text-sm">
+        <button type="submit" className="font-semibold text-copper-deep hover:underline">
+          Place pin
+        </button>
+        <button type="button" className="text-ink-soft hover:underline" onClick={onCancel}>
+          Cancel
+        </button>
+      </div>
+    </form>
+  );
+}
