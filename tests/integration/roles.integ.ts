@@ -266,6 +266,57 @@ const ENDPOINTS: Endpoint[] = [
     }),
     expected: projectRule("design.edit", 201),
   },
+  {
+    key: "GET /api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom(), surfaceKey: "wall-a" } }),
+    expected: projectRule("design.view", 200),
+  },
+  {
+    key: "PUT /api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]",
+    method: "PUT",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/route"),
+    prepare: async () => ({
+      params: { projectId, roomId: await freshRoom(), surfaceKey: "wall-a" },
+      body: { version: 0, placements: [{ id: "p1", buildUpId: makeBuildUp(projectId).id, code: "P-001", x: 0.1, y: 0.1, width: 0.6, height: 1.2 }] },
+    }),
+    expected: projectRule("design.edit", 200),
+  },
+  {
+    key: "PUT /api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/drawing",
+    method: "PUT",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/drawing/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom(), surfaceKey: "wall-a" }, body: { attachmentId: makeAttachment(projectId, "drawing").id, metresPerPixel: 0.01 } }),
+    expected: projectRule("drawing.upload", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/pins",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/pins/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom(), surfaceKey: "wall-a" }, body: { x: 1, y: 1, body: "Walk pin" } }),
+    expected: projectRule("pin.write", 201),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/pins/[pinId]/replies",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/pins/[pinId]/replies/route"),
+    prepare: async () => ({ params: { projectId, pinId: await freshPin() }, body: { body: "Walk reply" } }),
+    expected: projectRule("pin.write", 201),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/pins/[pinId]/resolve",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/pins/[pinId]/resolve/route"),
+    prepare: async () => ({ params: { projectId, pinId: await freshPin() }, body: { resolved: true } }),
+    expected: projectRule("pin.resolve", 200),
+  },
   { key: "GET /api/v1/firm/accounts", method: "GET", writes: false, load: () => import("@/app/api/v1/firm/accounts/route"), expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403) },
   {
     key: "POST /api/v1/firm/invitations",
@@ -285,6 +336,13 @@ async function freshRoom(): Promise<string> {
   const { createRoom } = await import("@/lib/services/rooms");
   const { actorFromHeaders } = await import("@/lib/auth/session");
   return createRoom(await actorFromHeaders(new Headers({ cookie: cookies.consultant })), projectId, roomBody()).id;
+}
+
+async function freshPin(): Promise<string> {
+  const { createPin } = await import("@/lib/services/boards");
+  const { actorFromHeaders } = await import("@/lib/auth/session");
+  const actor = await actorFromHeaders(new Headers({ cookie: cookies.architect }));
+  return (await createPin(actor, projectId, await freshRoom(), "wall-a", { x: 1, y: 1, body: "A pin to answer" })).id;
 }
 
 function buildUpBody() {
