@@ -303,7 +303,7 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
               {save.state === "conflict" && "not saved: someone else changed this board"}
               {save.state === "error" && "not saved yet"}
             </span>
-            <span>· {placements.length} panels</span>
+            <span>· {placements.length} {placements.length === 1 ? "panel" : "panels"}</span>
             <span>· {openPins} open {openPins === 1 ? "pin" : "pins"}</span>
             {!may.edit && <span>· you may pin, not move panels</span>}
           </span>
