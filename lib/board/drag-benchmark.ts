@@ -8,13 +8,15 @@
  * and two windows among them, so the rules have real breaks to word.
  */
 import { makeArray } from "./arrays";
+import { allPairsOverlapCount, scanSnapOffsets } from "./drag-baseline";
 import { updatePlacement } from "./edits";
 import { formatCode } from "./labels";
 import { checkRules } from "./rules";
 import { snapMove } from "./snap";
-import { buildSnapIndex } from "./snap-index";
+import { forEachOverlap } from "./sweep";
+import { buildSnapIndex, type SnapIndex } from "./snap-index";
 import { treatedArea } from "./treated-area";
-import type { BoardSurface, Placement } from "./types";
+import type { BoardSurface, Placement, Rect } from "./types";
 
 export function benchmarkBoard(count = 500): { surface: BoardSurface; placements: Placement[] } {
   const columns = 50;
@@ -50,6 +52,8 @@ export interface DragBenchmarkResult {
   worstFrameMs: number;
   indexBuildMs: number;
   breaksInLastFrame: number;
+  /** how many times faster than the plain way, measured on the same frames: all-pairs overlap tests over the sweep, an edge scan over the index */
+  ratios: { overlaps: number; snap: number };
 }
 
 export function runDragBenchmark(options: { count?: number; frames?: number; clearance?: number } = {}): DragBenchmarkResult {
@@ -65,8 +69,7 @@ export function runDragBenchmark(options: { count?: number; frames?: number; cle
   let breaks = 0;
   for (let f = 0; f < frames; f++) {
     const start = performance.now();
-    // A wandering pointer path across a few panels' width, in uneven steps.
-    const raw = { ...dragged, x: dragged.x + 1.3 * Math.sin(f / 17), y: dragged.y + 0.7 * Math.cos(f / 23) };
+    const raw = pointerPath(dragged, f);
     const snapped = snapMove(raw, index, { tolerance: 0.02, module: 0.3 }).rect;
     const afterSnap = performance.now();
     list = updatePlacement(list, dragged.id, { x: snapped.x, y: snapped.y });
@@ -88,5 +91,36 @@ export function runDragBenchmark(options: { count?: number; frames?: number; cle
     worstFrameMs,
     indexBuildMs,
     breaksInLastFrame: breaks,
+    ratios: compareWithPlainSearches(list, index, dragged, frames),
   };
+}
+
+/** A wandering pointer path across a few panels' width, in uneven steps. */
+const pointerPath = (from: Rect, frame: number): Rect => ({
+  x: from.x + 1.3 * Math.sin(frame / 17),
+  y: from.y + 0.7 * Math.cos(frame / 23),
+  width: from.width,
+  height: from.height,
+});
+
+/**
+ * Each search and its plain counterpart run in batches over the same inputs (a single search of a
+ * few microseconds is below what a frame's timer can tell apart), each warmed up first.
+ */
+function compareWithPlainSearches(list: readonly Placement[], index: SnapIndex, dragged: Rect, frames: number) {
+  const rects = Array.from({ length: frames }, (_, f) => pointerPath(dragged, f));
+  const rounds = Math.max(1, Math.ceil(frames / 30));
+  const snap = timed(rounds, () => rects.forEach((r) => snapMove(r, index, { tolerance: 0.02 })));
+  const scan = timed(rounds, () => rects.forEach((r) => scanSnapOffsets(r, index, 0.02)));
+  const sweep = timed(rounds, () => forEachOverlap(list, () => {}));
+  const allPairs = timed(rounds, () => allPairsOverlapCount(list));
+  return { overlaps: allPairs / sweep, snap: scan / snap };
+}
+
+/** Time of `rounds` runs after as many runs to warm up, ms. */
+function timed(rounds: number, run: () => void): number {
+  for (let i = 0; i < rounds; i++) run();
+  const start = performance.now();
+  for (let i = 0; i < rounds; i++) run();
+  return performance.now() - start;
 }

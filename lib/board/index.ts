@@ -4,6 +4,7 @@
  * screen pixels).
  */
 export * from "./arrays";
+export * from "./drag-baseline";
 export * from "./drag-benchmark";
 export * from "./edits";
 export * from "./history";
