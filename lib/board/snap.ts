@@ -80,31 +80,25 @@ export function snapMove(rect: Rect, index: SnapIndex, options: SnapOptions): Sn
  */
 export function snapResize(rect: Rect, handle: ResizeHandle, index: SnapIndex, options: SnapOptions & { minSize: number }): SnapResult {
   const axes = axesOf(index, options);
-  let { x, y, width, height } = rect;
-  const moving = { left: handle.includes("left"), right: handle.includes("right"), bottom: handle.includes("bottom"), top: handle.includes("top") };
-  if (moving.left || moving.right) {
-    const edge = moving.left ? x : x + width;
-    const d = axisOffset(axes.x, edge, NaN, NaN, options);
-    const w = moving.left ? width - d : width + d;
-    if (d !== 0 && w >= options.minSize) {
-      width = w;
-      if (moving.left) x += d;
-    }
-  }
-  if (moving.bottom || moving.top) {
-    const edge = moving.bottom ? y : y + height;
-    const d = axisOffset(axes.y, edge, NaN, NaN, options);
-    const h = moving.bottom ? height - d : height + d;
-    if (d !== 0 && h >= options.minSize) {
-      height = h;
-      if (moving.bottom) y += d;
-    }
-  }
-  const snapped = { x, y, width, height };
+  const left = handle.includes("left");
+  const right = handle.includes("right");
+  const bottom = handle.includes("bottom");
+  const top = handle.includes("top");
+  const [x, width] = resizeAxis(axes.x, rect.x, rect.width, left, right, options);
+  const [y, height] = resizeAxis(axes.y, rect.y, rect.height, bottom, top, options);
   const guides: SnapGuide[] = [];
-  if (moving.left || moving.right) guideAt("x", axes.x.edges, moving.left ? x : x + width, y, y + height, axes.x, options, guides);
-  if (moving.bottom || moving.top) guideAt("y", axes.y.edges, moving.bottom ? y : y + height, x, x + width, axes.y, options, guides);
-  return { rect: snapped, dx: x - rect.x, dy: y - rect.y, guides };
+  if (left || right) guideAt("x", axes.x.edges, left ? x : x + width, y, y + height, axes.x, options, guides);
+  if (bottom || top) guideAt("y", axes.y.edges, bottom ? y : y + height, x, x + width, axes.y, options, guides);
+  return { rect: { x, y, width, height }, dx: x - rect.x, dy: y - rect.y, guides };
+}
+
+/** One axis of a resize: [start, size] with the moving (low or high) edge snapped. */
+function resizeAxis(axis: Axis, at: number, size: number, low: boolean, high: boolean, options: SnapOptions & { minSize: number }): [number, number] {
+  if (!low && !high) return [at, size];
+  const d = axisOffset(axis, low ? at : at + size, NaN, NaN, options);
+  const snappedSize = low ? size - d : size + d;
+  if (d === 0 || snappedSize < options.minSize) return [at, size];
+  return low ? [at + d, snappedSize] : [at, snappedSize];
 }
 
 /** The offset for one axis: objects first, the grid only when no object is near. NaN lines are skipped. */
