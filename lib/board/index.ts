@@ -10,6 +10,7 @@ export * from "./edits";
 export * from "./history";
 export * from "./labels";
 export * from "./opening-label";
+export * from "./order";
 export * from "./pattern";
 export * from "./pattern-layout";
 export * from "./rect";

@@ -4,6 +4,7 @@
  * with the stretch each line covers (for drawing the guide). Each pointer move then costs a
  * binary search per moving edge, O(log n), and allocates nothing until a snap is found.
  */
+import { orderByValue } from "./order";
 import type { BoardSurface, Placement } from "./types";
 
 export const SNAP_SOURCES = ["surface", "opening", "panel", "grid"] as const;
@@ -45,14 +46,18 @@ class LineCollector {
   build(): SnapLines {
     const n = this.entries.length / 4;
     const e = this.entries;
-    const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => e[4 * a] - e[4 * b]);
+    const positions = new Float64Array(n);
+    for (let i = 0; i < n; i++) positions[i] = e[4 * i];
+    const order = new Int32Array(n);
+    orderByValue(positions, n, new Float64Array(n), order);
     const lines = { position: new Float64Array(n), lo: new Float64Array(n), hi: new Float64Array(n), source: new Uint8Array(n) };
-    order.forEach((from, to) => {
+    for (let to = 0; to < n; to++) {
+      const from = order[to];
       lines.position[to] = e[4 * from];
       lines.lo[to] = e[4 * from + 1];
       lines.hi[to] = e[4 * from + 2];
       lines.source[to] = e[4 * from + 3];
-    });
+    }
     return lines;
   }
 }
