@@ -61,6 +61,9 @@ type Props = {
 // hears of it only through the callbacks, so 500 panels stay smooth.
 export default function BoardCanvas(p: Props) {
   const stageRef = useRef<Konva.Stage>(null);
+  // While a panel is dragged it sits on a layer of its own, so each frame redraws one panel
+  // and not the other 499 (Konva redraws the whole layer a moving node is on).
+  const dragLayer = useRef<Konva.Layer>(null);
   const [marquee, setMarquee] = useState<{ x0: number; y0: number; x1: number; y1: number } | null>(null);
   const panning = useRef<{ x: number; y: number } | null>(null);
   const v = p.view;
@@ -182,6 +185,7 @@ export default function BoardCanvas(p: Props) {
             onDragStart={p.onDragStart}
             onDragMove={p.onDragMove}
             onDragEnd={p.onDragEnd}
+            dragLayer={dragLayer}
           />
         ))}
         {p.editable &&
@@ -190,6 +194,11 @@ export default function BoardCanvas(p: Props) {
           p.placements
             .filter((pl) => p.selected.has(pl.id))
             .map((pl) => <ResizeHandles key={pl.id} placement={pl} view={v} onResize={p.onResize} />)}
+      </Layer>
+      <Layer ref={dragLayer} />
+      {/* Guides, the marquee and pins change on every pointer move: a layer of their own, so
+          the panels' layer is not redrawn with them. */}
+      <Layer>
         {p.guides.map((g, i) => {
           const a = g.axis === "x" ? s(g.at, g.from) : s(g.from, g.at);
           const b = g.axis === "x" ? s(g.at, g.to) : s(g.to, g.at);
@@ -256,15 +265,22 @@ type PanelProps = {
   onDragStart: Props["onDragStart"];
   onDragMove: Props["onDragMove"];
   onDragEnd: Props["onDragEnd"];
+  dragLayer: React.RefObject<Konva.Layer | null>;
 };
 
 // One panel. Memoised on its placement object, so moving one panel redraws one panel.
-const PanelShape = memo(function PanelShape({ placement: pl, view: v, viewport, facing, selected, broken, draggable, onSelect, onDragStart, onDragMove, onDragEnd }: PanelProps) {
+const PanelShape = memo(function PanelShape({ placement: pl, view: v, viewport, facing, selected, broken, draggable, onSelect, onDragStart, onDragMove, onDragEnd, dragLayer }: PanelProps) {
+  const home = useRef<Konva.Container | null>(null);
   const a = toScreen(v, pl.x, pl.y + pl.height);
   const w = pl.width * v.scale;
   const h = pl.height * v.scale;
   const detail = facing ? visibleDetail(v.scale, facing.facing) : null;
   const marks = detail?.mode === "marks";
+  // The pattern is worked out once per panel and view, not on every redraw of the layer.
+  const pattern = useMemo(
+    () => (facing ? panelPattern(facing.facing, pl, { borderX: facing.borderX, borderY: facing.borderY }, { scale: v.scale, clip: viewport }) : null),
+    [facing, pl, v.scale, viewport],
+  );
   const stroke = broken?.length ? (broken.some((b) => b.rule === "overlap" || b.rule === "outside" || b.rule === "over-opening") ? FAULT : CAUTION) : selected ? COPPER : INK;
   const toRect = (node: Konva.Node): BoardRect => {
     const world = toWorld(v, node.x(), node.y());
@@ -281,22 +297,29 @@ const PanelShape = memo(function PanelShape({ placement: pl, view: v, viewport, 
         e.cancelBubble = true;
         onSelect([pl.id], e.evt.shiftKey);
       }}
-      onDragStart={() => onDragStart(pl.id)}
+      onDragStart={(e) => {
+        home.current = e.target.getParent();
+        if (dragLayer.current) e.target.moveTo(dragLayer.current);
+        onDragStart(pl.id);
+      }}
       onDragMove={(e) => {
         const snapped = onDragMove(pl.id, toRect(e.target));
         const at = toScreen(v, snapped.x, snapped.y + snapped.height);
         e.target.position(at);
       }}
-      onDragEnd={(e) => onDragEnd(pl.id, toRect(e.target))}
+      onDragEnd={(e) => {
+        const rect = toRect(e.target);
+        if (home.current) e.target.moveTo(home.current);
+        onDragEnd(pl.id, rect);
+      }}
     >
       <Rect width={w} height={h} fill={selected ? "#f3e3d6" : "#efe9dc"} stroke={stroke} strokeWidth={selected || broken?.length ? 2 : 1} />
-      {facing && (
+      {facing && pattern && (
         <Shape
           listening={false}
           sceneFunc={(ctx) => {
             // Zoomed out: a tone over the perforated field as dark as its open area; zoomed in:
             // the holes or slots at true scale, only those on screen.
-            const pattern = panelPattern(facing.facing, pl, { borderX: facing.borderX, borderY: facing.borderY }, { scale: v.scale, clip: viewport });
             const fx = (pattern.field.x - pl.x) * v.scale;
             const fy = (pl.y + pl.height - pattern.field.y - pattern.field.height) * v.scale;
             if (!marks || (!pattern.holes && !pattern.slots)) {

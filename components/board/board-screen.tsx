@@ -8,12 +8,13 @@ import type { RoomView } from "@/lib/services/rooms";
 import type { MaterialView } from "@/lib/services/materials";
 import type { BuildUpView } from "@/lib/services/build-ups";
 import type { Placement, Rect } from "@/lib/board/types";
-import { checkRules, rulesByPlacement } from "@/lib/board/rules";
+import { checkRules, rulesByPlacement, type RuleBreak } from "@/lib/board/rules";
 import { buildSnapIndex, type SnapIndex } from "@/lib/board/snap-index";
 import { snapMove, snapResize, type SnapGuide } from "@/lib/board/snap";
 import { resizeRect, type ResizeHandle } from "@/lib/board/resize";
 import { begin, cancel, canRedo, canUndo, commit, createHistory, push, redo, undo, type History } from "@/lib/board/history";
 import { addPlacements, moveBy, removePlacements, updatePlacement } from "@/lib/board/edits";
+import { boundsOf } from "@/lib/board/rect";
 import { duplicate, makeArray } from "@/lib/board/arrays";
 import { nextCode, nextCodes } from "@/lib/board/labels";
 import { cycleSelection, marqueeSelect, nudge } from "@/lib/board/selection";
@@ -40,6 +41,8 @@ type May = { edit: boolean; pin: boolean; resolve: boolean; drawing: boolean };
 type Props = { initial: BoardView; room: RoomView; materials: MaterialView[]; buildUps: BuildUpView[]; units: UnitPreference; may: May; focusPin: number | null };
 
 const CANVAS_HEIGHT = 600;
+/** the smallest panel the server accepts (lib/schemas/board.ts) */
+const MIN_PANEL = 0.02;
 const toPlacements = (b: BoardView): Placement[] => b.placements.map((p) => ({ ...p }));
 
 declare global {
@@ -68,6 +71,7 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
   const surface = useMemo(() => room.surfaces.find((s) => s.key === initial.surfaceKey)!, [room.surfaces, initial.surfaceKey]);
   const [view, setView] = useState<View>(() => fitToView(surface, size, 48));
   const save = useBoardSave(initial, initial.version, may.edit);
+  const schedule = save.schedule;
   const snapIndex = useRef<SnapIndex | null>(null);
   const dragStart = useRef<Rect | null>(null);
   const drawing = useDrawingImage(board.drawing?.url ?? null);
@@ -102,7 +106,27 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
   // What the check and the rules see: the placements, with the one being dragged at its live spot.
   const shown = useMemo(() => (live ? placements.map((p) => (p.id === live.id ? { ...p, ...live.rect } : p)) : placements), [placements, live]);
   const breaks = useMemo(() => checkRules(boardSurface, shown, { clearance: board.clearance }), [boardSurface, shown, board.clearance]);
-  const breaksBy = useMemo(() => rulesByPlacement(breaks), [breaks]);
+  // Keep each panel's list of broken rules the same object while its words do not change, so
+  // the memoised panels that still break the same rules are not redrawn on every frame.
+  // While a panel is dragged, the other panels keep the marks they had when it started (the
+  // list beside the board follows every move); they are brought up to date when it is dropped.
+  const previousBreaks = useRef(new Map<string, RuleBreak[]>());
+  const breaksBy = useMemo(() => {
+    const next = rulesByPlacement(breaks);
+    for (const [id, list] of next) {
+      const before = previousBreaks.current.get(id);
+      if (before && before.length === list.length && before.every((b, i) => b.message === list[i].message)) next.set(id, before);
+    }
+    if (live) {
+      const frozen = new Map(previousBreaks.current);
+      const mine = next.get(live.id);
+      if (mine) frozen.set(live.id, mine);
+      else frozen.delete(live.id);
+      return frozen;
+    }
+    previousBreaks.current = next;
+    return next;
+  }, [breaks, live]);
 
   // The live check: the build-ups' band values are computed once; each frame only re-sums the room.
   const panels = useMemo(() => new Map<string, PanelAlpha>(buildUps.map((b) => [b.id, { name: b.name, alpha: octaveAlphaFromBands(b.result.octaves) }])), [buildUps]);
@@ -127,40 +151,57 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
   const change = useCallback(
     (next: readonly Placement[], label: string) => {
       setHistory((h) => push(h, next, label));
-      save.schedule(next, gridModule);
+      schedule(next, gridModule);
     },
-    [save, gridModule],
+    [schedule, gridModule],
   );
 
   // --- canvas callbacks ---------------------------------------------------------------
+  // Stable callbacks: every panel is memoised on its props, and a new function would redraw all.
+  const onSelect = useCallback((ids: string[], additive: boolean) => setSelected((cur) => (additive ? new Set([...cur, ...ids]) : new Set(ids))), []);
   const tolerance = 8 / view.scale;
+  // A drag moves the selection (or the panel alone); it snaps the selection's outline, against
+  // everything that is not moving with it.
+  const dragGroup = useRef<{ dx: number; dy: number; width: number; height: number } | null>(null);
   const onDragStart = useCallback(
     (id: string) => {
-      const others = placements.filter((p) => p.id !== id);
-      snapIndex.current = buildSnapIndex(boardSurface, others);
+      const moving = selected.has(id) ? selected : new Set([id]);
+      snapIndex.current = buildSnapIndex(boardSurface, placements, { exclude: moving });
       const p = placements.find((x) => x.id === id)!;
+      const bounds = boundsOf(placements.filter((x) => moving.has(x.id)))!;
+      dragGroup.current = { dx: p.x - bounds.x, dy: p.y - bounds.y, width: bounds.width, height: bounds.height };
       dragStart.current = { x: p.x, y: p.y, width: p.width, height: p.height };
       if (!selected.has(id)) setSelected(new Set([id]));
       setHistory((h) => begin(h));
     },
     [placements, boardSurface, selected],
   );
+  const snapDragged = useCallback(
+    (rect: Rect): { rect: Rect; guides: SnapGuide[] } => {
+      const g = dragGroup.current;
+      if (!snapIndex.current || !g) return { rect, guides: [] };
+      const outline = { x: rect.x - g.dx, y: rect.y - g.dy, width: g.width, height: g.height };
+      const snapped = snapMove(outline, snapIndex.current, { tolerance, module: gridModule });
+      return { rect: { ...rect, x: rect.x + snapped.dx, y: rect.y + snapped.dy }, guides: snapped.guides };
+    },
+    [tolerance, gridModule],
+  );
   const onDragMove = useCallback(
     (id: string, rect: Rect) => {
       const stats = (window.__cavitasBoard ??= { lastDragAt: 0, checkAt: 0, frames: 0 });
       stats.lastDragAt = performance.now();
       stats.frames++;
-      const snapped = snapIndex.current ? snapMove(rect, snapIndex.current, { tolerance, module: gridModule }) : { rect, guides: [] };
+      const snapped = snapDragged(rect);
       setGuides(snapped.guides);
       setLive({ id, rect: snapped.rect });
       return snapped.rect;
     },
-    [tolerance, gridModule],
+    [snapDragged],
   );
   const onDragEnd = useCallback(
     (id: string, rect: Rect) => {
       const start = dragStart.current;
-      const snapped = snapIndex.current ? snapMove(rect, snapIndex.current, { tolerance, module: gridModule }).rect : rect;
+      const snapped = snapDragged(rect).rect;
       setGuides([]);
       setLive(null);
       if (!start) return;
@@ -169,18 +210,21 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
       const ids = selected.has(id) ? selected : new Set([id]);
       const next = moveBy(placements, ids, dx, dy);
       setHistory((h) => commit(push(h, next, `Move ${codes.get(id)}`)));
-      save.schedule(next, gridModule);
+      schedule(next, gridModule);
     },
-    [placements, selected, tolerance, gridModule, codes, save],
+    [placements, selected, snapDragged, gridModule, codes, schedule],
   );
+  // The snap index is built once when a resize starts, not on every pointer move.
+  const resizeIndex = useRef<{ id: string; index: SnapIndex } | null>(null);
   const onResize = useCallback(
     (id: string, handle: ResizeHandle, dx: number, dy: number, done: boolean) => {
       const p = placements.find((x) => x.id === id);
       if (!p) return null;
-      const index = buildSnapIndex(boardSurface, placements.filter((x) => x.id !== id));
-      const raw = resizeRect(p, handle, dx, dy, 0.05);
-      const rect = snapResize(raw, handle, index, { tolerance, module: gridModule, minSize: 0.05 }).rect;
+      if (resizeIndex.current?.id !== id) resizeIndex.current = { id, index: buildSnapIndex(boardSurface, placements, { exclude: new Set([id]) }) };
+      const raw = resizeRect(p, handle, dx, dy, MIN_PANEL);
+      const rect = snapResize(raw, handle, resizeIndex.current.index, { tolerance, module: gridModule, minSize: MIN_PANEL }).rect;
       if (done) {
+        resizeIndex.current = null;
         setLive(null);
         change(updatePlacement(placements, id, rect), `Resize ${p.code}`);
       } else setLive({ id, rect });
@@ -383,7 +427,7 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
               scalePoints={scalePoints}
               mode={mode}
               editable={may.edit}
-              onSelect={(ids, additive) => setSelected((cur) => (additive ? new Set([...cur, ...ids]) : new Set(ids)))}
+              onSelect={onSelect}
               onDragStart={onDragStart}
               onDragMove={onDragMove}
               onDragEnd={onDragEnd}

@@ -1,12 +1,5 @@
-import fs from "node:fs";
-import net from "node:net";
-import os from "node:os";
-import path from "node:path";
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import type { TestProject } from "vitest/node";
-import { buildIsCurrent, nextBin } from "@/lib/cli/build-state";
-import { startMailCatcher, type MailCatcher } from "@/lib/mail/catcher";
-import { ensureChromium } from "./ensure-chromium";
+import { startTestServer, type TestServer } from "./server";
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -16,76 +9,15 @@ declare module "vitest" {
   }
 }
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.once("error", reject);
-    srv.listen(0, "127.0.0.1", () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForServer(url: string, child: ChildProcess, timeoutMs = 60_000): Promise<void> {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
-    try {
-      const res = await fetch(url, { redirect: "manual" });
-      if (res.status > 0) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`The app did not answer at ${url} within ${timeoutMs} ms`);
-}
-
-let server: ChildProcess | null = null;
-let mail: MailCatcher | null = null;
-let dataDir = "";
+let server: TestServer | null = null;
 
 export async function setup(project: TestProject) {
-  const root = process.cwd();
-  ensureChromium();
-  if (!buildIsCurrent(root)) {
-    const built = spawnSync(process.execPath, [nextBin(root), "build"], {
-      stdio: "inherit",
-      env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" },
-    });
-    if (built.status !== 0) throw new Error("next build failed");
-  }
-  dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "cavitas-e2e-"));
-  mail = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-  const port = await freePort();
-  const baseUrl = `http://localhost:${port}`;
-  const env: NodeJS.ProcessEnv = {
-    ...process.env,
-    NODE_ENV: "production",
-    NEXT_TELEMETRY_DISABLED: "1",
-    PORT: String(port),
-    CAVITAS_DATA_DIR: dataDir,
-    CAVITAS_APP_URL: baseUrl,
-    CAVITAS_SMTP_PORT: String(mail.smtpPort),
-    CAVITAS_MAIL_HTTP_PORT: String(mail.httpPort),
-  };
-  // Migrate and seed the demo scenario into the temporary database, as `npm run demo` does.
-  const seeded = spawnSync(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "lib/cli/seed.ts"], { env, stdio: "inherit" });
-  if (seeded.status !== 0) throw new Error("seeding the e2e database failed");
-  const child = spawn(process.execPath, [nextBin(root), "start", "-p", String(port)], { env, stdio: ["ignore", "inherit", "inherit"] });
-  server = child;
-  await waitForServer(`${baseUrl}/sign-in`, child);
-  project.provide("baseUrl", baseUrl);
-  project.provide("mailUrl", `http://127.0.0.1:${mail.httpPort}`);
-  project.provide("dataDir", dataDir);
+  server = await startTestServer();
+  project.provide("baseUrl", server.baseUrl);
+  project.provide("mailUrl", server.mailUrl);
+  project.provide("dataDir", server.dataDir);
 }
 
 export async function teardown() {
-  if (server && server.exitCode === null) {
-    server.kill("SIGTERM");
-    await new Promise((r) => server!.once("exit", r));
-  }
-  await mail?.close();
-  if (dataDir) fs.rmSync(dataDir, { recursive: true, force: true });
+  await server?.stop();
 }

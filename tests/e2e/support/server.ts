@@ -1,0 +1,83 @@
+import fs from "node:fs";
+import net from "node:net";
+import os from "node:os";
+import path from "node:path";
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { buildIsCurrent, nextBin } from "@/lib/cli/build-state";
+import { startMailCatcher, type MailCatcher } from "@/lib/mail/catcher";
+import { ensureChromium } from "./ensure-chromium";
+
+// A production build served by `next start` on a temporary database seeded with the demo
+// scenario, with its own mail catcher, on free ports. Used by the end-to-end tests and the
+// board benchmark.
+export type TestServer = { baseUrl: string; mailUrl: string; dataDir: string; databasePath: string; stop: () => Promise<void> };
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.once("error", reject);
+    srv.listen(0, "127.0.0.1", () => {
+      const { port } = srv.address() as net.AddressInfo;
+      srv.close(() => resolve(port));
+    });
+  });
+}
+
+async function waitForServer(url: string, child: ChildProcess, timeoutMs = 60_000): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
+    try {
+      const res = await fetch(url, { redirect: "manual" });
+      if (res.status > 0) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`The app did not answer at ${url} within ${timeoutMs} ms`);
+}
+
+export async function startTestServer(opts: { beforeStart?: (databasePath: string) => void | Promise<void> } = {}): Promise<TestServer> {
+  const root = process.cwd();
+  ensureChromium();
+  if (!buildIsCurrent(root)) {
+    const built = spawnSync(process.execPath, [nextBin(root), "build"], { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
+    if (built.status !== 0) throw new Error("next build failed");
+  }
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "cavitas-e2e-"));
+  const databasePath = path.join(dataDir, "cavitas.sqlite");
+  const mail: MailCatcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
+  const port = await freePort();
+  const baseUrl = `http://localhost:${port}`;
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "production",
+    NEXT_TELEMETRY_DISABLED: "1",
+    PORT: String(port),
+    CAVITAS_DATA_DIR: dataDir,
+    CAVITAS_APP_URL: baseUrl,
+    CAVITAS_SMTP_PORT: String(mail.smtpPort),
+    CAVITAS_MAIL_HTTP_PORT: String(mail.httpPort),
+  };
+  // Migrate and seed the demo scenario into the temporary database, as `npm run demo` does.
+  const seeded = spawnSync(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "lib/cli/seed.ts"], { env, stdio: "inherit" });
+  if (seeded.status !== 0) throw new Error("seeding the e2e database failed");
+  await opts.beforeStart?.(databasePath);
+  const child = spawn(process.execPath, [nextBin(root), "start", "-p", String(port)], { env, stdio: ["ignore", "inherit", "inherit"] });
+  await waitForServer(`${baseUrl}/sign-in`, child);
+  return {
+    baseUrl,
+    mailUrl: `http://127.0.0.1:${mail.httpPort}`,
+    dataDir,
+    databasePath,
+    stop: async () => {
+      if (child.exitCode === null) {
+        child.kill("SIGTERM");
+        await new Promise((r) => child.once("exit", r));
+      }
+      await mail.close();
+      fs.rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
