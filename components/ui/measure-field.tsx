@@ -66,7 +66,13 @@ export function MeasureField({ label, metres, units, onChange, range, error, tes
           focused.current = false;
           commit(text);
         }}
-        onKeyDown={(e) => e.key === "Enter" && commit(text)}
+        onKeyDown={(e) => {
+          // Enter takes the typed length; it does not submit the surrounding form before that.
+          if (e.key === "Enter") {
+            e.preventDefault();
+            commit(text);
+          }
+        }}
         onChange={(e) => {
           const value = e.target.value;
           setText(value);
