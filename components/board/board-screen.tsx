@@ -25,7 +25,7 @@ import { octaveAlphaFromBands } from "@/lib/rooms/octaves";
 import { fetchBoard, usePinActions } from "@/lib/queries/boards";
 import type { UnitPreference } from "@/lib/units";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
-import { Notice } from "@/components/ui/notice";
+import { SaveNotices } from "@/components/ui/save-notices";
 import type { CanvasMode } from "./board-canvas";
 import { LiveCheck } from "./live-check";
 import { PinsPanel } from "./pins-panel";
@@ -366,22 +366,12 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
           </nav>
         }
       />
-      {save.state === "conflict" && (
-        <div className="mb-4">
-          <Notice tone="caution" title="Someone else saved this board">
-            {save.message}{" "}
-            <button type="button" className="font-semibold underline" onClick={reload}>
-              Reload the board
-            </button>{" "}
-            (your unsaved changes on this screen will be replaced).
-          </Notice>
-        </div>
-      )}
-      {save.state === "error" && save.message && (
-        <div className="mb-4">
-          <Notice tone="fault">{save.message}</Notice>
-        </div>
-      )}
+      <SaveNotices
+        what="board"
+        conflict={save.state === "conflict" ? (save.message ?? "") : null}
+        onReload={reload}
+        error={save.state === "error" && save.message ? { message: save.message, issues: [] } : null}
+      />
       <div className="grid gap-5 xl:grid-cols-[220px_1fr_300px]">
         <Toolbar
           mode={mode}

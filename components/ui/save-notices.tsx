@@ -1,12 +1,13 @@
-import type { ApiError } from "@/lib/queries/api";
 import { Notice } from "./notice";
 
 // What a versioned save can answer besides success: someone else saved first (409), or the
 // server refused the input. Used by every screen that edits a versioned document.
-export function SaveNotices({ what, conflict, onReload, error }: { what: string; conflict: string | null; onReload: () => void; error: ApiError | null }) {
+type Refusal = { status?: number; message: string; issues: { field: string; message: string }[] };
+
+export function SaveNotices({ what, conflict, onReload, error }: { what: string; conflict: string | null; onReload: () => void; error: Refusal | null }) {
   return (
     <>
-      {conflict && (
+      {conflict !== null && (
         <div className="mb-6">
           <Notice tone="caution" title={`Someone else saved this ${what}`}>
             {conflict}{" "}

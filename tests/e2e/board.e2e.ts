@@ -105,7 +105,7 @@ describe("elevation board", () => {
     await b.page.getByRole("button", { name: "Add a panel" }).click();
     await b.page.getByText("Someone else saved this board").waitFor({ timeout: 10_000 });
     await b.screenshot("board-conflict");
-    await b.page.getByRole("button", { name: "Reload the board" }).click();
+    await b.page.getByRole("button", { name: "Reload their version" }).click();
     await expect.poll(() => savedVersion(b)).toBe(await savedVersion(a));
     expect(await b.page.getByTestId("board-save-state").locator("..").textContent()).toContain("1 panel");
     await b.close();
