@@ -12,6 +12,7 @@ import { Sheet, TitleBlock } from "@/components/ui/sheet";
 import { Notice } from "@/components/ui/notice";
 import { InviteForm } from "./invite-form";
 import { OpenInvitations } from "./open-invitations";
+import { ClearanceForm } from "./clearance-form";
 
 export function ProjectOverviewView({ initial, units }: { initial: ProjectOverview; units: UnitPreference }) {
   const { data = initial } = useQuery({ ...projectQuery(initial.project.id), initialData: initial });
@@ -79,6 +80,12 @@ export function ProjectOverviewView({ initial, units }: { initial: ProjectOvervi
               As {ROLE_WORDS[myRole].toLowerCase()} you see this project&apos;s issued submittals; rooms, build-ups and layouts stay with the
               design team until they are issued.
             </Notice>
+          )}
+          {mayDo.includes("project.edit") && (
+            <Sheet title="Board rules">
+              <p className="mb-3 text-xs text-ink-soft">Panels closer than this to a surface edge or an opening are flagged on every board of the project.</p>
+              <ClearanceForm projectId={project.id} clearance={project.edgeClearance} units={units} />
+            </Sheet>
           )}
           <Sheet title="What you may do here">
             <ul className="grid gap-1.5 text-sm sm:grid-cols-2" data-testid="may-do">

@@ -60,3 +60,11 @@ export function useRevokeInvitation(projectId: string) {
     onSettled: () => qc.invalidateQueries({ queryKey: keys.project(projectId) }),
   });
 }
+
+export function useUpdateProject(projectId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: Record<string, unknown>) => api<ProjectOverview>(`/api/v1/projects/${encodeURIComponent(projectId)}`, { method: "PATCH", body: input }),
+    onSuccess: (next) => qc.setQueryData(keys.project(projectId), next),
+  });
+}

@@ -3,7 +3,7 @@ import { getDb, transaction } from "@/db/client";
 import { membership, project, room, user, type ProjectRole } from "@/db/schema";
 import { actionsFor, roleMay, type ProjectAction } from "@/lib/permissions";
 import { parseInput } from "@/lib/schemas/parse";
-import { createProjectSchema } from "@/lib/schemas/project";
+import { createProjectSchema, updateProjectSchema } from "@/lib/schemas/project";
 import type { Actor } from "./actor";
 import { authorize, requireActor, requireFirmMember } from "./guard";
 import { recordAudit } from "./audit";
@@ -90,7 +90,7 @@ export type RoomSummary = {
 };
 
 export type ProjectOverview = {
-  project: { id: string; name: string; reference: string | null; site: string | null; createdAt: string };
+  project: { id: string; name: string; reference: string | null; site: string | null; createdAt: string; edgeClearance: number };
   myRole: ProjectRole;
   mayDo: ProjectAction[];
   team: TeamMember[];
@@ -118,6 +118,7 @@ export function getProjectOverview(actor: Actor | null, projectId: string): Proj
       reference: access.project.reference,
       site: access.project.site,
       createdAt: access.project.createdAt.toISOString(),
+      edgeClearance: access.project.edgeClearance,
     },
     myRole: role,
     mayDo: actionsFor(role),
@@ -126,4 +127,22 @@ export function getProjectOverview(actor: Actor | null, projectId: string): Proj
     invitations: roleMay(role, "team.invite") ? listOpenInvitations(actor, projectId) : null,
     openPins: roleMay(role, "design.view") ? [...openPinCounts(projectId).values()].reduce((a, n) => a + n, 0) : null,
   };
+}
+
+export function updateProject(actor: Actor | null, projectId: string, raw: unknown): ProjectOverview {
+  const access = authorize(actor, projectId, "project.edit");
+  const input = parseInput(updateProjectSchema, raw);
+  transaction((tx) => {
+    tx.update(project)
+      .set({
+        ...(input.name !== undefined && { name: input.name }),
+        ...(input.reference !== undefined && { reference: input.reference || null }),
+        ...(input.site !== undefined && { site: input.site || null }),
+        ...(input.edgeClearance !== undefined && { edgeClearance: input.edgeClearance }),
+      })
+      .where(eq(project.id, projectId))
+      .run();
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "project.updated", subjectId: projectId, detail: input });
+  });
+  return getProjectOverview(actor, projectId);
 }

@@ -88,6 +88,20 @@ describe("saving a board", () => {
   });
 });
 
+describe("the project's edge clearance", () => {
+  it("is set by the consultant, reaches every board, and refuses a length out of range", async () => {
+    const projectRoute = await import("@/app/api/v1/projects/[projectId]/route");
+    const bad = await call(projectRoute.PATCH, { method: "PATCH", cookie: cookie.consultant, params: { projectId }, body: { edgeClearance: 5 } });
+    expect(bad.status).toBe(422);
+    expect(bad.json.error.issues[0].field).toBe("edgeClearance");
+    const ok = await call(projectRoute.PATCH, { method: "PATCH", cookie: cookie.consultant, params: { projectId }, body: { edgeClearance: 0.1 } });
+    expect(ok.status).toBe(200);
+    const b = await call((await boardRoute()).GET, { cookie: cookie.architect, params: params("wall-c") });
+    expect(b.json.clearance).toBe(0.1);
+    expect((await call(projectRoute.PATCH, { method: "PATCH", cookie: cookie.architect, params: { projectId }, body: { edgeClearance: 0 } })).status).toBe(403);
+  });
+});
+
 describe("review pins", () => {
   it("an architect's pin e-mails the consultant; the consultant's reply e-mails the architect; the consultant resolves", async () => {
     const made = await call((await pinsRoute()).POST, { method: "POST", cookie: cookie.architect, params: params("wall-b"), body: { x: 2, y: 2.5, body: "Clash with the sprinkler head" } });

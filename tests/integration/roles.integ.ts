@@ -97,6 +97,14 @@ const ENDPOINTS: Endpoint[] = [
     expected: projectRule("project.view", 200),
   },
   {
+    key: "PATCH /api/v1/projects/[projectId]",
+    method: "PATCH",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/route"),
+    prepare: async () => ({ params: { projectId }, body: { edgeClearance: 0.06 } }),
+    expected: projectRule("project.edit", 200),
+  },
+  {
     key: "GET /api/v1/projects/[projectId]/members",
     method: "GET",
     writes: false,
