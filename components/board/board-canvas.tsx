@@ -9,7 +9,7 @@ import type { SnapGuide } from "@/lib/board/snap";
 import type { ResizeHandle } from "@/lib/board/resize";
 import { panelPattern, visibleDetail } from "@/lib/board/pattern";
 import type { BoardView } from "@/lib/services/boards";
-import { toScreen as screenOf, toWorld as worldOf, type View } from "@/lib/board/view";
+import { pinchZoomFactor, toScreen as screenOf, toWorld as worldOf, wheelZoomFactor, type View } from "@/lib/board/view";
 
 export type ViewTransform = View;
 export type CanvasMode = "select" | "draw" | "pin" | "scale";
@@ -66,6 +66,7 @@ export default function BoardCanvas(p: Props) {
   const dragLayer = useRef<Konva.Layer>(null);
   const [marquee, setMarquee] = useState<{ x0: number; y0: number; x1: number; y1: number } | null>(null);
   const panning = useRef<{ x: number; y: number } | null>(null);
+  const pinch = useRef<number | null>(null);
   const v = p.view;
   const s = (x: number, y: number) => toScreen(v, x, y);
   const origin = s(0, 0);
@@ -137,8 +138,19 @@ export default function BoardCanvas(p: Props) {
       onWheel={(e) => {
         e.evt.preventDefault();
         const pos = stageRef.current?.getPointerPosition();
-        if (pos) p.onZoom(e.evt.deltaY < 0 ? 1.15 : 1 / 1.15, pos.x, pos.y);
+        if (pos) p.onZoom(wheelZoomFactor(e.evt.deltaY), pos.x, pos.y);
       }}
+      onTouchMove={(e) => {
+        // Two fingers: pinch to zoom about their midpoint.
+        const t = e.evt.touches;
+        if (t.length !== 2) return;
+        e.evt.preventDefault();
+        const box = stageRef.current?.container().getBoundingClientRect();
+        const d = Math.hypot(t[0].clientX - t[1].clientX, t[0].clientY - t[1].clientY);
+        if (pinch.current !== null && box) p.onZoom(pinchZoomFactor(pinch.current, d), (t[0].clientX + t[1].clientX) / 2 - box.left, (t[0].clientY + t[1].clientY) / 2 - box.top);
+        pinch.current = d;
+      }}
+      onTouchEnd={() => (pinch.current = null)}
       style={{ cursor: p.mode === "pin" ? "crosshair" : p.mode === "draw" || p.mode === "scale" ? "copy" : "default" }}
     >
       <Layer listening={true}>
