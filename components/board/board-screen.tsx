@@ -26,6 +26,7 @@ import { fetchBoard, usePinActions } from "@/lib/queries/boards";
 import type { UnitPreference } from "@/lib/units";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
 import { SaveNotices } from "@/components/ui/save-notices";
+import { Notice } from "@/components/ui/notice";
 import type { CanvasMode } from "./board-canvas";
 import { LiveCheck } from "./live-check";
 import { PinsPanel } from "./pins-panel";
@@ -366,6 +367,13 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
           </nav>
         }
       />
+      {surface.kind === "ceiling" && (
+        <div className="mb-4">
+          <Notice tone="caution" title="Overhead panels">
+            Panels on a ceiling need fixings rated for their weight and, where required, seismic restraint, designed by a competent person. Follow the manufacturer&apos;s instructions and the governing code.
+          </Notice>
+        </div>
+      )}
       <SaveNotices
         what="board"
         conflict={save.state === "conflict" ? (save.message ?? "") : null}
