@@ -1,5 +1,5 @@
 import { redirect } from "next/navigation";
-import { currentActor } from "@/lib/auth/current";
+import { currentActor } from "@/app/_lib/current-actor";
 
 export const dynamic = "force-dynamic";
 

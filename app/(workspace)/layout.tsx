@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { TopBar } from "@/components/shell/top-bar";
-import { requirePageActor } from "@/lib/auth/current";
+import { requirePageActor } from "@/app/_lib/current-actor";
 import { getMe } from "@/lib/services/settings";
 
 export const dynamic = "force-dynamic";

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { SignInForm } from "@/components/auth/sign-in-form";
-import { currentActor } from "@/lib/auth/current";
+import { currentActor } from "@/app/_lib/current-actor";
 
 export const metadata: Metadata = { title: "Sign in" };
 export const dynamic = "force-dynamic";

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { FirmAccounts } from "@/components/firm/firm-accounts";
-import { requirePageActor } from "@/lib/auth/current";
+import { requirePageActor } from "@/app/_lib/current-actor";
 import { getFirmAccounts } from "@/lib/services/firm";
 
 export const metadata: Metadata = { title: "Firm accounts" };

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { ProjectList } from "@/components/projects/project-list";
-import { requirePageActor } from "@/lib/auth/current";
+import { requirePageActor } from "@/app/_lib/current-actor";
 import { listMyProjects } from "@/lib/services/projects";
 
 export const metadata: Metadata = { title: "Projects" };

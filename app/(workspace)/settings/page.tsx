@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { SettingsForm } from "@/components/settings/settings-form";
-import { requirePageActor } from "@/lib/auth/current";
+import { requirePageActor } from "@/app/_lib/current-actor";
 import { getMe } from "@/lib/services/settings";
 
 export const metadata: Metadata = { title: "Settings" };

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { InvitationPanel } from "@/components/invitations/invitation-panel";
 import { Notice } from "@/components/ui/notice";
-import { currentActor } from "@/lib/auth/current";
+import { currentActor } from "@/app/_lib/current-actor";
 import { AppError } from "@/lib/errors";
 import { describeInvitation, type InvitationView } from "@/lib/services/invitations";
 

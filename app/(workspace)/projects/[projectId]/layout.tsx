@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { notFound } from "next/navigation";
 import { ProjectNav } from "@/components/projects/project-nav";
-import { requirePageActor } from "@/lib/auth/current";
+import { requirePageActor } from "@/app/_lib/current-actor";
 import { AppError } from "@/lib/errors";
 import { roleMay } from "@/lib/permissions";
 import { authorize } from "@/lib/services/guard";

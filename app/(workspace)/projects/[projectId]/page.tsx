@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ProjectOverviewView } from "@/components/projects/project-overview";
-import { requirePageActor } from "@/lib/auth/current";
+import { requirePageActor } from "@/app/_lib/current-actor";
 import { AppError } from "@/lib/errors";
 import { getProjectOverview } from "@/lib/services/projects";
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { BuildUpLibrary } from "@/components/build-ups/build-up-library";
-import { requirePageActor } from "@/lib/auth/current";
-import { orNotFound } from "@/lib/pages";
+import { requirePageActor } from "@/app/_lib/current-actor";
+import { orNotFound } from "@/app/_lib/or-not-found";
 import { roleMay } from "@/lib/permissions";
 import { listBuildUps } from "@/lib/services/build-ups";
 import { authorize } from "@/lib/services/guard";

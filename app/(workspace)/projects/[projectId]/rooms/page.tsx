@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { RoomList } from "@/components/rooms/room-list";
-import { requirePageActor } from "@/lib/auth/current";
-import { orNotFound } from "@/lib/pages";
+import { requirePageActor } from "@/app/_lib/current-actor";
+import { orNotFound } from "@/app/_lib/or-not-found";
 import { roleMay } from "@/lib/permissions";
 import { authorize } from "@/lib/services/guard";
 import { listRooms } from "@/lib/services/rooms";

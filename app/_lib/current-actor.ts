@@ -1,6 +1,8 @@
+// Framework glue for server pages (Next.js headers and redirects); kept in app/, since lib/
+// holds no framework code.
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
-import { actorFromHeaders } from "./session";
+import { actorFromHeaders } from "@/lib/auth/session";
 import type { Actor } from "@/lib/services/actor";
 
 // For server components: the actor of the current request, or a redirect to sign-in.
