@@ -94,7 +94,7 @@ export function listRooms(actor: Actor | null, projectId: string): RoomSummary[]
     .all()
     .map((row) => {
       const v = view(row, storedFields(row), panels, pins);
-      const mean = v.check.ok && v.check.mean ? v.check.mean : null;
+      const mean = v.check.ok ? (v.check.mean ?? midFrequency(v.check.octaves)) : null;
       return {
         id: v.id,
         name: v.name,
@@ -108,6 +108,20 @@ export function listRooms(actor: Actor | null, projectId: string): RoomSummary[]
         openPins: v.openPins,
       };
     });
+}
+
+// Where the target names no mean (limits per octave, a common-practice range), the list shows
+// the mean of the 500 Hz and 1 kHz octaves and the worst standing among the octaves it covers.
+function midFrequency(octaves: Extract<CheckResult, { ok: true }>["octaves"]) {
+  const mid = octaves.filter((o) => o.f === 500 || o.f === 1000);
+  const mean = (pick: (o: (typeof mid)[number]) => number | null | undefined) => {
+    const values = mid.map(pick).filter((x): x is number => typeof x === "number");
+    return values.length === mid.length ? values.reduce((a, b) => a + b, 0) / values.length : null;
+  };
+  const judged = octaves.filter((o) => o.status === "over" || o.status === "under" || o.status === "within");
+  const status = judged.some((o) => o.status === "over") ? "over" : judged.some((o) => o.status === "under") ? "under" : judged.length ? "within" : "no target";
+  const highs = mid.map((o) => o.target.high).filter((x): x is number => x !== null);
+  return { before: mean((o) => o.before?.sabine), after: mean((o) => o.after?.sabine), low: null, high: highs.length ? Math.min(...highs) : null, status };
 }
 
 export function getRoom(actor: Actor | null, projectId: string, roomId: string): RoomView {
