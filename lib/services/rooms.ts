@@ -61,11 +61,19 @@ function storedFields(row: Room): RoomFields {
   return fieldsFromRows(row, surfaces, openings, treatments);
 }
 
-function view(row: Room, fields: RoomFields, panels: Map<string, PanelAlpha>, pins = openPinCounts(row.projectId)): RoomView {
+// Project-wide inputs of the check (panel band values, material lookup, pin counts) are read
+// once per request and shared by every room it shows.
+function view(
+  row: Room,
+  fields: RoomFields,
+  panels: Map<string, PanelAlpha>,
+  pins = openPinCounts(row.projectId),
+  lookup = materialLookup(row.projectId),
+): RoomView {
   const surfaces = surfacesFor(fields);
   const placed = placedAreas(row.id);
   // The check counts both: treatment entered by area, and panels placed on the boards.
-  const { check, target, issues } = runCheck({ fields, surfaces, treatments: [...fields.treatments, ...placed], panels, lookup: materialLookup(row.projectId) });
+  const { check, target, issues } = runCheck({ fields, surfaces, treatments: [...fields.treatments, ...placed], panels, lookup });
   return {
     ...fields,
     id: row.id,
@@ -86,6 +94,7 @@ export function listRooms(actor: Actor | null, projectId: string): RoomSummary[]
   authorize(actor, projectId, "design.view");
   const panels = projectPanels(projectId);
   const pins = openPinCounts(projectId);
+  const lookup = materialLookup(projectId);
   return getDb()
     .select()
     .from(room)
@@ -93,7 +102,7 @@ export function listRooms(actor: Actor | null, projectId: string): RoomSummary[]
     .orderBy(asc(room.name))
     .all()
     .map((row) => {
-      const v = view(row, storedFields(row), panels, pins);
+      const v = view(row, storedFields(row), panels, pins, lookup);
       const mean = v.check.ok ? (v.check.mean ?? midFrequency(v.check.octaves)) : null;
       return {
         id: v.id,
