@@ -1,7 +1,7 @@
 /**
- * Cavitas's acoustics engine: pure TypeScript, no framework, no database. The README's
- * "Calculation contract" section documents the contract; REFERENCES.md section 0 fixes the
- * model variants implemented here.
+ * Cavitas's acoustics engine: pure TypeScript, no framework, no database. The contract
+ * (inputs, outputs, units and the model variant behind each number) is documented in
+ * docs/contract.md; each formula names its published source where it is implemented.
  */
 export * from "./air";
 export * from "./air-absorption";
