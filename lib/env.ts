@@ -15,6 +15,13 @@ const envSchema = z.object({
   CAVITAS_MAIL_FROM: z.string().min(3).default("Cavitas <noreply@cavitas.example.test>"),
   CAVITAS_UPLOAD_LIMIT_MB: z.coerce.number().positive().default(20),
   BETTER_AUTH_SECRET: z.string().min(32).optional(),
+  // Reverse proxies whose X-Forwarded-For Cavitas believes: addresses or CIDR ranges,
+  // comma-separated. Unset, no forwarded header is believed at all.
+  CAVITAS_TRUSTED_PROXIES: z
+    .string()
+    .optional()
+    .transform((v) => (v ?? "").split(",").map((s) => s.trim()).filter(Boolean))
+    .pipe(z.array(z.union([z.ipv4(), z.ipv6(), z.cidrv4(), z.cidrv6()], { error: "each entry must be an IP address or a CIDR range" }))),
 });
 
 export type Env = {
@@ -28,6 +35,7 @@ export type Env = {
   mailFrom: string;
   uploadLimitBytes: number;
   authSecret: string;
+  trustedProxies: string[];
 };
 
 let cached: Env | null = null;
@@ -53,6 +61,7 @@ export function env(): Env {
     mailFrom: e.CAVITAS_MAIL_FROM,
     uploadLimitBytes: Math.round(e.CAVITAS_UPLOAD_LIMIT_MB * 1024 * 1024),
     authSecret: e.BETTER_AUTH_SECRET ?? localSecret(dataDir),
+    trustedProxies: e.CAVITAS_TRUSTED_PROXIES,
   };
   return cached;
 }

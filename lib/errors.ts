@@ -7,6 +7,7 @@ export type ErrorCode =
   | "conflict"
   | "gone"
   | "invalid"
+  | "too_many"
   | "bad_request";
 
 export type FieldIssue = { field: string; message: string };
@@ -31,6 +32,9 @@ export const gone = (message: string) => new AppError("gone", message);
 export const invalid = (issues: FieldIssue[], message = "Some fields need attention.") =>
   new AppError("invalid", message, issues);
 
+/** a limit was reached; the message says how long to wait */
+export const tooMany = (message: string) => new AppError("too_many", message);
+
 export const STATUS: Record<ErrorCode, number> = {
   unauthenticated: 401,
   forbidden: 403,
@@ -38,5 +42,6 @@ export const STATUS: Record<ErrorCode, number> = {
   conflict: 409,
   gone: 410,
   invalid: 422,
+  too_many: 429,
   bad_request: 400,
 };

@@ -7,6 +7,7 @@ export const PERMISSIONS = {
   "project.edit": ["consultant"],
   "team.view": ["consultant", "architect", "installer", "client"],
   "team.invite": ["consultant"],
+  "team.remove": ["consultant"],
   "design.view": ["consultant", "architect"],
   "design.edit": ["consultant"],
   "pin.write": ["consultant", "architect"],
@@ -35,6 +36,7 @@ export const ACTION_WORDS: Record<ProjectAction, string> = {
   "project.edit": "edit this project",
   "team.view": "see the project team",
   "team.invite": "invite people to this project",
+  "team.remove": "remove people from this project",
   "design.view": "see draft rooms, build-ups and layouts",
   "design.edit": "edit rooms, build-ups or layouts",
   "pin.write": "place or answer review pins",
@@ -46,6 +48,18 @@ export const ACTION_WORDS: Record<ProjectAction, string> = {
   "shop.download": "download shop drawings",
   "install.record": "record install progress",
 };
+
+// Actions on accounts rather than on a project, and who may take them: anyone (no session
+// needed: the e-mailed link is the proof), the account's own holder, or the administrator
+// of the firm the account belongs to.
+export const ACCOUNT_PERMISSIONS = {
+  "password.reset": "anyone",
+  "password.change": "self",
+  "sessions.manage": "self",
+  "account.disable": "firm-admin",
+} as const satisfies Record<string, "anyone" | "self" | "firm-admin">;
+
+export type AccountAction = keyof typeof ACCOUNT_PERMISSIONS;
 
 export const ROLE_WORDS: Record<ProjectRole, string> = {
   consultant: "Consultant",

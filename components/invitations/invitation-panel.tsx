@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { authClient } from "@/lib/auth/client";
-import { useAcceptInvitation } from "@/lib/queries/account";
+import { useAcceptInvitation, useCreateInvitedAccount } from "@/lib/queries/account";
 import { ApiError } from "@/lib/queries/api";
 import { inviteSignUpSchema } from "@/lib/schemas/invitation";
 import type { InvitationView } from "@/lib/services/invitations";
@@ -13,12 +13,14 @@ import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { RoleBadge } from "@/components/ui/role-badge";
 import { SignInForm } from "@/components/auth/sign-in-form";
+import { fieldErrorsOf } from "@/components/ui/field-errors";
 
 type Props = { token: string; view: InvitationView; signedInAs: string | null };
 
 export function InvitationPanel({ token, view, signedInAs }: Props) {
   const router = useRouter();
   const accept = useAcceptInvitation(token);
+  const create = useCreateInvitedAccount(token);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -35,23 +37,34 @@ export function InvitationPanel({ token, view, signedInAs }: Props) {
     }
   }
 
+  // The account is made for the invited address from the link's token and joins at once;
+  // then the new holder signs in with the password just chosen.
   async function signUp(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = Object.fromEntries(new FormData(e.currentTarget));
     const parsed = inviteSignUpSchema.safeParse(form);
     if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0] ?? "name"), i.message])));
+      setErrors(fieldErrorsOf(parsed.error));
       return;
     }
     setErrors({});
+    setFailure(null);
     setBusy(true);
-    const { error } = await authClient.signUp.email({ email: view.email, password: parsed.data.password, name: parsed.data.name });
-    setBusy(false);
-    if (error) {
-      setFailure(error.message ?? "The account could not be created.");
-      return;
+    try {
+      const created = await create.mutateAsync(parsed.data);
+      const { error } = await authClient.signIn.email({ email: created.email, password: parsed.data.password });
+      if (error) {
+        setFailure(`Your account is ready, but signing in failed: ${error.message ?? "try again from the sign-in page."}`);
+        return;
+      }
+      router.replace(created.projectId ? `/projects/${created.projectId}` : "/projects");
+      router.refresh();
+    } catch (err) {
+      if (err instanceof ApiError && err.issues.length) setErrors(Object.fromEntries(err.issues.map((i) => [i.field, i.message])));
+      else setFailure(err instanceof ApiError ? err.message : "The account could not be created. Try again.");
+    } finally {
+      setBusy(false);
     }
-    await acceptNow();
   }
 
   const heading = view.projectName ? (
@@ -110,8 +123,8 @@ export function InvitationPanel({ token, view, signedInAs }: Props) {
           <TextField label="Your name" name="name" autoComplete="name" error={errors.name} />
           <TextField label="Password" name="password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.password} />
           <TextField label="Password again" name="confirm" type="password" autoComplete="new-password" error={errors.confirm} />
-          <Button type="submit" disabled={busy || accept.isPending}>
-            {busy || accept.isPending ? "Creating your account…" : "Create account and join"}
+          <Button type="submit" disabled={busy}>
+            {busy ? "Creating your account…" : "Create account and join"}
           </Button>
         </form>
       )}

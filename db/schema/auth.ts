@@ -15,6 +15,11 @@ export const user = sqliteTable("user", {
   unitPreference: text("unit_preference", { enum: ["metric", "imperial"] })
     .notNull()
     .default("metric"),
+  // Set by a firm administrator: the account keeps its name on pins and decisions, but its
+  // sessions are ended and it cannot sign in until re-enabled. disabledBy is the
+  // administrator's user id (no foreign key: accounts are disabled, never deleted).
+  disabledAt: integer("disabled_at", { mode: "timestamp_ms" }),
+  disabledBy: text("disabled_by"),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });

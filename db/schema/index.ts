@@ -10,3 +10,4 @@ export * from "./material";
 export * from "./surface";
 export * from "./build-up";
 export * from "./board";
+export * from "./throttle";

@@ -5,12 +5,13 @@ import type { Actor } from "@/lib/services/actor";
 import { auth } from "./server";
 
 // The signed-in person for a request, read fresh from the database so a changed unit
-// preference or firm membership applies at once. Null when there is no valid session.
+// preference, firm membership or disabled account applies at once. Null when there is no
+// valid session (disabling an account also deletes its sessions; this is the second lock).
 export async function actorFromHeaders(headers: Headers): Promise<Actor | null> {
   const session = await auth().api.getSession({ headers });
   if (!session) return null;
   const row = getDb().select().from(user).where(eq(user.id, session.user.id)).get();
-  if (!row) return null;
+  if (!row || row.disabledAt) return null;
   return {
     userId: row.id,
     email: row.email.toLowerCase(),
@@ -18,5 +19,6 @@ export async function actorFromHeaders(headers: Headers): Promise<Actor | null> 
     firmId: row.firmId,
     isFirmAdmin: row.isFirmAdmin,
     unitPreference: row.unitPreference,
+    sessionId: session.session.id,
   };
 }

@@ -41,3 +41,76 @@ export function firmInvitationMail(p: { inviterName: string; firmName: string; l
   const text = `${lines.join("\n\n")}\n\nAccept the invitation: ${p.link}\n`;
   return { subject, text, html: layout(subject, lines, { href: p.link, label: "Accept the invitation" }) };
 }
+
+// Account messages. Each says what happened, when, and what to do if it was not you.
+function notice(subject: string, lines: string[], link: { href: string; label: string }) {
+  const text = `${lines.join("\n\n")}\n\n${link.label}: ${link.href}\n`;
+  return { subject, text, html: layout(subject, lines, link) };
+}
+
+export function passwordResetMail(p: { name: string; link: string; expiresAt: Date }) {
+  return notice(
+    "Set a new Cavitas password",
+    [
+      `Hello ${p.name}, someone (we hope you) asked to set a new password for this Cavitas account.`,
+      `The link below works once and until ${p.expiresAt.toUTCString()}. Your current password keeps working until you use it.`,
+      "If you did not ask for this, ignore this message: nothing changes.",
+    ],
+    { href: p.link, label: "Set a new password" },
+  );
+}
+
+export function passwordChangedMail(p: { name: string; how: "changed" | "reset"; at: Date; signInLink: string; resetLink: string }) {
+  const what = p.how === "reset" ? "was set through a reset link" : "was changed from the settings page";
+  return notice(
+    "Your Cavitas password was changed",
+    [
+      `Hello ${p.name}, the password of your Cavitas account ${what} on ${p.at.toUTCString()}.`,
+      p.how === "reset" ? "Every device that was signed in has been signed out." : "Your other devices have been signed out.",
+      `If this was not you, set a new password at once: ${p.resetLink}`,
+    ],
+    { href: p.signInLink, label: "Sign in" },
+  );
+}
+
+export function accountDisabledMail(p: { name: string; adminName: string; firmName: string; at: Date; signInLink: string }) {
+  return notice(
+    `Your ${p.firmName} account on Cavitas was disabled`,
+    [
+      `Hello ${p.name}, ${p.adminName} disabled your Cavitas account with ${p.firmName} on ${p.at.toUTCString()}. You have been signed out everywhere and cannot sign in until it is re-enabled.`,
+      "Your review pins, replies and decisions stay in the projects under your name.",
+      `Ask ${p.adminName} if you think this is a mistake.`,
+    ],
+    { href: p.signInLink, label: "Cavitas" },
+  );
+}
+
+export function accountEnabledMail(p: { name: string; adminName: string; firmName: string; signInLink: string }) {
+  return notice(
+    `Your ${p.firmName} account on Cavitas is active again`,
+    [`Hello ${p.name}, ${p.adminName} re-enabled your Cavitas account with ${p.firmName}. You can sign in with your password as before.`],
+    { href: p.signInLink, label: "Sign in" },
+  );
+}
+
+export function removedFromProjectMail(p: { name: string; byName: string; projectName: string; role: ProjectRole; projectsLink: string }) {
+  return notice(
+    `You were removed from ${p.projectName} on Cavitas`,
+    [
+      `Hello ${p.name}, ${p.byName} removed you from the project "${p.projectName}", where you were ${ROLE_WORDS[p.role].toLowerCase()}.`,
+      "Your pins and replies stay in the project under your name. Ask the project's consultant if you need access again.",
+    ],
+    { href: p.projectsLink, label: "Your projects" },
+  );
+}
+
+export function signedOutEverywhereMail(p: { name: string; count: number; at: Date; resetLink: string }) {
+  return notice(
+    "You were signed out of Cavitas everywhere",
+    [
+      `Hello ${p.name}, on ${p.at.toUTCString()} you signed out of Cavitas on every device (${p.count} session${p.count === 1 ? "" : "s"} ended).`,
+      `If this was not you, someone may know your password: set a new one at ${p.resetLink}`,
+    ],
+    { href: p.resetLink, label: "Set a new password" },
+  );
+}

@@ -1,6 +1,7 @@
 // Stable query keys, so a mutation can invalidate exactly what it changed.
 export const keys = {
   me: ["me"] as const,
+  sessions: ["me", "sessions"] as const,
   projects: ["projects"] as const,
   project: (id: string) => ["projects", id] as const,
   firm: ["firm"] as const,

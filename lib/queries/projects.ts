@@ -68,3 +68,14 @@ export function useUpdateProject(projectId: string) {
     onSuccess: (next) => qc.setQueryData(keys.project(projectId), next),
   });
 }
+
+export function useRemoveMember(projectId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (userId: string) =>
+      api<{ removed: string; self: boolean }>(`/api/v1/projects/${encodeURIComponent(projectId)}/members/${encodeURIComponent(userId)}`, { method: "DELETE" }),
+    // Someone who removed themselves can no longer read the project: refresh only the list.
+    onSuccess: (res) =>
+      Promise.all([res.self ? qc.removeQueries({ queryKey: keys.project(projectId) }) : qc.invalidateQueries({ queryKey: keys.project(projectId) }), qc.invalidateQueries({ queryKey: keys.projects })]),
+  });
+}

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { PROJECT_ROLES } from "@/lib/roles";
 import { emailField, nameField } from "./common";
-import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
+import { newPasswordShape, samePasswordTwice, TWICE } from "./account";
 
 export const inviteToProjectSchema = z.object({
   email: emailField,
@@ -17,13 +17,5 @@ export const inviteToFirmSchema = z.object({
 export type InviteToFirmInput = z.infer<typeof inviteToFirmSchema>;
 
 // The sign-up form on the invitation page; the e-mail comes from the invitation itself.
-export const inviteSignUpSchema = z
-  .object({
-    name: nameField,
-    password: z
-      .string()
-      .min(MIN_PASSWORD_LENGTH, { error: `Use at least ${MIN_PASSWORD_LENGTH} characters for the password.` })
-      .max(128, { error: "Keep the password under 128 characters." }),
-    confirm: z.string(),
-  })
-  .refine((v) => v.password === v.confirm, { path: ["confirm"], error: "The two passwords differ." });
+export const inviteSignUpSchema = z.object({ name: nameField, ...newPasswordShape }).refine(samePasswordTwice, TWICE);
+export type InviteSignUpInput = z.infer<typeof inviteSignUpSchema>;

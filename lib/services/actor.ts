@@ -6,4 +6,6 @@ export type Actor = {
   firmId: string | null;
   isFirmAdmin: boolean;
   unitPreference: "metric" | "imperial";
+  /** the session this request came with, so "this device" can be told from the others */
+  sessionId?: string;
 };

@@ -2,7 +2,7 @@ import { and, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { membership, project, type Membership, type Project } from "@/db/schema";
 import { AppError, forbidden, notFound, unauthenticated } from "@/lib/errors";
-import { ACTION_WORDS, ROLE_WORDS, roleMay, type ProjectAction } from "@/lib/permissions";
+import { ACCOUNT_PERMISSIONS, ACTION_WORDS, ROLE_WORDS, roleMay, type AccountAction, type ProjectAction } from "@/lib/permissions";
 import type { Actor } from "./actor";
 
 // The one server-side guard. Every service that acts on a project calls authorize() first;
@@ -23,6 +23,20 @@ export function requireFirmAdmin(actor: Actor | null): Actor & { firmId: string 
   const a = requireFirmMember(actor);
   if (!a.isFirmAdmin) throw forbidden("Only the firm administrator can manage accounts.");
   return a;
+}
+
+type ActorFor<A extends AccountAction> = (typeof ACCOUNT_PERMISSIONS)[A] extends "anyone"
+  ? Actor | null
+  : (typeof ACCOUNT_PERMISSIONS)[A] extends "firm-admin"
+    ? Actor & { firmId: string }
+    : Actor;
+
+// Account actions (password, sessions, disabling) by the table in lib/permissions.ts.
+export function authorizeAccount<A extends AccountAction>(actor: Actor | null, action: A): ActorFor<A> {
+  const who = ACCOUNT_PERMISSIONS[action] as string;
+  if (who === "anyone") return actor as ActorFor<A>;
+  if (who === "firm-admin") return requireFirmAdmin(actor) as ActorFor<A>;
+  return requireActor(actor) as ActorFor<A>;
 }
 
 export type ProjectAccess = { actor: Actor; project: Project; membership: Membership };

@@ -1,14 +1,15 @@
 import { and, eq, gt, isNull } from "drizzle-orm";
-import { getDb, transaction } from "@/db/client";
-import { firm, invitation, membership, project, user, type Invitation } from "@/db/schema";
+import { getDb, transaction, type Tx } from "@/db/client";
+import { account, firm, invitation, membership, project, user, type Invitation } from "@/db/schema";
+import { auth } from "@/lib/auth/server";
 import { findInvitationByToken } from "@/db/queries/invitations";
 import { conflict, forbidden, gone, notFound } from "@/lib/errors";
-import { env } from "@/lib/env";
+import { LINKS } from "@/lib/mail/links";
 import { deliver, enqueueMail, type DeliveryResult } from "@/lib/mail/outbox";
 import { firmInvitationMail, projectInvitationMail } from "@/lib/mail/templates";
 import { ROLE_WORDS } from "@/lib/permissions";
 import { parseInput } from "@/lib/schemas/parse";
-import { inviteToFirmSchema, inviteToProjectSchema } from "@/lib/schemas/invitation";
+import { inviteSignUpSchema, inviteToFirmSchema, inviteToProjectSchema } from "@/lib/schemas/invitation";
 import { hashToken, newToken } from "@/lib/tokens";
 import type { Actor } from "./actor";
 import { authorize, requireActor, requireFirmAdmin } from "./guard";
@@ -28,7 +29,7 @@ function summary(inv: Invitation, inviterName: string | null): InvitationSummary
   return { id: inv.id, email: inv.email, role: inv.role, expiresAt: inv.expiresAt.toISOString(), invitedBy: inviterName };
 }
 
-const inviteLink = (token: string) => `${env().appUrl}/invite/${token}`;
+const inviteLink = LINKS.invitation;
 
 function openInvitationWhere(email: string, projectId: string | null) {
   return and(
@@ -188,14 +189,31 @@ export function describeInvitation(token: string): InvitationView {
   };
 }
 
-export function acceptInvitation(actor: Actor | null, token: string): { projectId: string | null } {
-  const a = requireActor(actor);
+// An invitation that can still be used, or the refusal that says why not.
+function usableInvitation(token: string): Invitation {
   const inv = findInvitationByToken(token);
   if (!inv) throw notFound("Invitation");
   const state = stateOf(inv);
   if (state === "withdrawn") throw gone("This invitation was withdrawn. Ask for a new one.");
   if (state === "used") throw conflict("This invitation has already been used. Sign in to reach the project.");
   if (state === "expired") throw gone("This invitation has expired. Ask for a new one.");
+  return inv;
+}
+
+// The membership or firm place the invitation grants, its use recorded.
+function join(tx: Tx, inv: Invitation, userId: string) {
+  if (inv.projectId && inv.role) {
+    tx.insert(membership).values({ projectId: inv.projectId, userId, role: inv.role }).run();
+  } else {
+    tx.update(user).set({ firmId: inv.firmId }).where(eq(user.id, userId)).run();
+  }
+  tx.update(invitation).set({ acceptedAt: new Date(), acceptedBy: userId }).where(eq(invitation.id, inv.id)).run();
+  recordAudit(tx, { actorId: userId, projectId: inv.projectId, action: "invitation.accepted", subjectId: inv.id, detail: { role: inv.role } });
+}
+
+export function acceptInvitation(actor: Actor | null, token: string): { projectId: string | null } {
+  const a = requireActor(actor);
+  const inv = usableInvitation(token);
   if (a.email !== inv.email) {
     throw forbidden(`This invitation is for ${inv.email}, but you are signed in as ${a.email}. Sign out and use the invited address.`);
   }
@@ -210,14 +228,32 @@ export function acceptInvitation(actor: Actor | null, token: string): { projectI
   } else if (a.firmId && a.firmId !== inv.firmId) {
     throw conflict("Your account already belongs to another firm.");
   }
-  transaction((tx) => {
-    if (inv.projectId && inv.role) {
-      tx.insert(membership).values({ projectId: inv.projectId, userId: a.userId, role: inv.role }).run();
-    } else {
-      tx.update(user).set({ firmId: inv.firmId }).where(eq(user.id, a.userId)).run();
-    }
-    tx.update(invitation).set({ acceptedAt: new Date(), acceptedBy: a.userId }).where(eq(invitation.id, inv.id)).run();
-    recordAudit(tx, { actorId: a.userId, projectId: inv.projectId, action: "invitation.accepted", subjectId: inv.id, detail: { role: inv.role } });
-  });
+  transaction((tx) => join(tx, inv, a.userId));
   return { projectId: inv.projectId };
+}
+
+// Sign-up exists only here: the holder of an open invitation link creates the account for
+// the invited address (never one they choose) and joins in the same transaction. The link
+// is the proof of the mailbox, so the address counts as verified.
+export async function createAccountFromInvitation(token: string, raw: unknown): Promise<{ email: string; projectId: string | null }> {
+  const input = parseInput(inviteSignUpSchema, raw);
+  refuseExistingAccount(usableInvitation(token));
+  const hash = await (await auth().$context).password.hash(input.password);
+  // Hashing takes a moment: check again, then write with no pause in between.
+  const inv = usableInvitation(token);
+  refuseExistingAccount(inv);
+  transaction((tx) => {
+    const id = crypto.randomUUID();
+    tx.insert(user).values({ id, name: input.name, email: inv.email, emailVerified: true }).run();
+    tx.insert(account).values({ id: crypto.randomUUID(), accountId: id, providerId: "credential", userId: id, password: hash }).run();
+    recordAudit(tx, { actorId: id, projectId: inv.projectId, action: "account.created", subjectId: id });
+    join(tx, inv, id);
+  });
+  return { email: inv.email, projectId: inv.projectId };
+}
+
+function refuseExistingAccount(inv: Invitation) {
+  if (getDb().select({ id: user.id }).from(user).where(eq(user.email, inv.email)).get()) {
+    throw conflict(`An account for ${inv.email} already exists. Sign in with it to accept the invitation.`);
+  }
 }

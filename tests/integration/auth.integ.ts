@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { useTestEnvironment } from "../support/test-env";
-import { makeFirm, makeUser, TEST_PASSWORD } from "../support/factories";
+import { addMember, makeFirm, makeProject, makeUser, TEST_PASSWORD, uniqueEmail } from "../support/factories";
+import { tableCounts } from "../support/counts";
 import { APP_URL, call, signIn } from "../support/http";
 
 let envHandle: Awaited<ReturnType<typeof useTestEnvironment>>;
@@ -46,9 +47,22 @@ describe("sign-in", () => {
     expect(res.json.error.message).toMatch(/sign in/i);
   });
 
-  it("refuses sign-up for an address that holds no invitation", async () => {
-    const res = await authPost("/sign-up/email", { email: "stranger@example.test", password: TEST_PASSWORD, name: "Stranger (fictional)" });
-    expect(res.status).toBeGreaterThanOrEqual(400);
-    expect(JSON.stringify(res.json)).toMatch(/invitation/i);
+  it("refuses sign-up through better-auth for every address alike, invited or not, and makes no account", async () => {
+    const f = makeFirm();
+    const consultant = await makeUser({ firmId: f.id });
+    const p = makeProject(f.id);
+    addMember(p.id, consultant.id, "consultant");
+    const { inviteToProject } = await import("@/lib/services/invitations");
+    const { actorFromHeaders } = await import("@/lib/auth/session");
+    const invited = uniqueEmail("invited");
+    await inviteToProject(await actorFromHeaders(new Headers({ cookie: await signIn(consultant.email) })), p.id, { email: invited, role: "architect" });
+
+    const before = tableCounts();
+    const squat = await authPost("/sign-up/email", { email: invited, password: TEST_PASSWORD, name: "Squatter (fictional)" });
+    const stranger = await authPost("/sign-up/email", { email: uniqueEmail("stranger"), password: TEST_PASSWORD, name: "Stranger (fictional)" });
+    expect(squat.status).toBeGreaterThanOrEqual(400);
+    // The same answer for both: nothing tells an attacker which addresses are invited.
+    expect([squat.status, squat.json]).toEqual([stranger.status, stranger.json]);
+    expect(tableCounts()).toEqual(before);
   });
 });

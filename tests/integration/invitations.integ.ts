@@ -39,16 +39,11 @@ async function tokenFromMail(email: string): Promise<string> {
   return link.split("/invite/")[1];
 }
 
-async function signUp(email: string, name: string) {
-  const { auth } = await import("@/lib/auth/server");
-  const res = await auth().handler(
-    new Request(`${APP_URL}/api/auth/sign-up/email`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: APP_URL },
-      body: JSON.stringify({ email, password: TEST_PASSWORD, name }),
-    }),
-  );
-  return res;
+const accountRoute = () => import("@/app/api/v1/invitations/[token]/account/route");
+
+// The only way to make an account: the invitation's token, for the invitation's address.
+async function signUp(token: string, name: string, extra: Record<string, unknown> = {}) {
+  return call((await accountRoute()).POST, { method: "POST", params: { token }, body: { name, password: TEST_PASSWORD, confirm: TEST_PASSWORD, ...extra } });
 }
 
 describe("project invitations", () => {
@@ -65,12 +60,10 @@ describe("project invitations", () => {
     const view = await call((await describeRoute()).GET, { params: { token } });
     expect(view.json).toMatchObject({ state: "open", email, role: "architect", projectId, accountExists: false });
 
-    const signUpRes = await signUp(email, "Nia Newcomer (fictional)");
-    expect(signUpRes.status).toBe(200);
+    const signUpRes = await signUp(token, "Nia Newcomer (fictional)");
+    expect(signUpRes.status).toBe(201);
+    expect(signUpRes.json).toEqual({ email, projectId });
     const cookie = await signIn(email);
-    const accepted = await call((await acceptRoute()).POST, { method: "POST", cookie, params: { token } });
-    expect(accepted.status).toBe(200);
-    expect(accepted.json.projectId).toBe(projectId);
 
     const projects = await call((await import("@/app/api/v1/projects/route")).GET, { cookie });
     expect(projects.json.projects).toEqual([expect.objectContaining({ id: projectId, role: "architect" })]);
@@ -80,6 +73,49 @@ describe("project invitations", () => {
     const again = await call((await acceptRoute()).POST, { method: "POST", cookie, params: { token } });
     expect(again.status).toBe(409);
     expect(again.json.error.message).toMatch(/already been used/);
+    expect(tableCounts()).toEqual(before);
+  });
+
+  it("binds the new account to the invited address, whatever address the body names", async () => {
+    const email = uniqueEmail("bound");
+    await invite(email, "client");
+    const token = await tokenFromMail(email);
+    const res = await signUp(token, "Bo Bound (fictional)", { email: "someone-else@example.test" });
+    expect(res.status).toBe(201);
+    expect(res.json.email).toBe(email);
+    const { getDb } = await import("@/db/client");
+    const { user } = await import("@/db/schema");
+    expect(getDb().select().from(user).where(eq(user.email, "someone-else@example.test")).all()).toHaveLength(0);
+    expect(getDb().select().from(user).where(eq(user.email, email)).get()?.emailVerified).toBe(true);
+  });
+
+  it("makes no account from a wrong token (404), a spent link (409) or for an address that has one (409)", async () => {
+    const existing = await makeUser();
+    const before = tableCounts();
+    expect((await signUp("not-a-real-token", "Nobody (fictional)")).status).toBe(404);
+    await invite(existing.email, "client");
+    const token = await tokenFromMail(existing.email);
+    const taken = await signUp(token, "Twin (fictional)");
+    expect(taken.status).toBe(409);
+    expect(taken.json.error.message).toMatch(/already exists\. Sign in/);
+    const spent = uniqueEmail("spent");
+    await invite(spent, "client");
+    const spentToken = await tokenFromMail(spent);
+    expect((await signUp(spentToken, "First (fictional)")).status).toBe(201);
+    const after = tableCounts();
+    expect((await signUp(spentToken, "Second (fictional)")).status).toBe(409);
+    expect(tableCounts()).toEqual(after);
+    expect(after.user).toBe(before.user + 1);
+  });
+
+  it("refuses a sign-up form with bad fields at each field, and writes nothing", async () => {
+    const email = uniqueEmail("fields");
+    await invite(email, "client");
+    const token = await tokenFromMail(email);
+    const before = tableCounts();
+    const res = await call((await accountRoute()).POST, { method: "POST", params: { token }, body: { name: "", password: "short", confirm: "other" } });
+    expect(res.status).toBe(422);
+    expect(res.json.error.issues.map((i: { field: string }) => i.field).sort()).toEqual(["confirm", "name", "password"]);
     expect(tableCounts()).toEqual(before);
   });
 
@@ -140,8 +176,8 @@ describe("project invitations", () => {
     getDb().update(invitation).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitation.email, email)).run();
     const view = await call((await describeRoute()).GET, { params: { token } });
     expect(view.json.state).toBe("expired");
-    // No open invitation is left, so sign-up is refused too.
-    expect((await signUp(email, "Lou Late (fictional)")).status).toBeGreaterThanOrEqual(400);
+    // The link cannot make an account either.
+    expect((await signUp(token, "Lou Late (fictional)")).status).toBe(410);
     const existing = await makeUser({ email: uniqueEmail("late-existing") });
     const cookie = await signIn(existing.email);
     const res = await call((await acceptRoute()).POST, { method: "POST", cookie, params: { token } });

@@ -2,7 +2,9 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { useTestEnvironment } from "../support/test-env";
-import { addMember, makeAttachment, makeBuildUp, makeFirm, makeProject, makeUser, SPEC, TINY_PDF, uniqueEmail } from "../support/factories";
+import { addMember, makeAttachment, makeBuildUp, makeFirm, makeProject, makeUser, SPEC, TEST_PASSWORD, TINY_PDF, uniqueEmail } from "../support/factories";
+import { tokenIn, waitForMail } from "../support/mail";
+import { getDb } from "@/db/client";
 import { call, signIn } from "../support/http";
 import { roleMay, type ProjectAction } from "@/lib/permissions";
 import { PROJECT_ROLES, type ProjectRole } from "@/lib/roles";
@@ -17,12 +19,14 @@ const EVERYONE: Who[] = [...PROJECT_ROLES, "outsider", "admin", "none"];
 
 let envHandle: Awaited<ReturnType<typeof useTestEnvironment>>;
 let projectId = "";
+let firmId = "";
 const cookies = {} as Record<Exclude<Who, "none">, string>;
 const emails = {} as Record<Exclude<Who, "none">, string>;
 
 beforeAll(async () => {
   envHandle = await useTestEnvironment();
   const firm = makeFirm();
+  firmId = firm.id;
   const project = makeProject(firm.id);
   projectId = project.id;
   for (const role of PROJECT_ROLES) {
@@ -57,8 +61,10 @@ type Endpoint = {
   load: () => Promise<Record<string, any>>;
   method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
   writes: boolean;
-  prepare?: () => Promise<{ params?: Record<string, string>; body?: unknown; form?: FormData }>;
+  prepare?: (who: Who) => Promise<{ params?: Record<string, string>; body?: unknown; form?: FormData }>;
   expected: (who: Who) => number;
+  /** puts the actor back as it was (a fresh session, the original password) for later routes */
+  restore?: (who: Who) => Promise<void>;
 };
 
 const projectRule = (action: ProjectAction, okStatus: number) => (who: Who) => {
@@ -334,7 +340,114 @@ const ENDPOINTS: Endpoint[] = [
     prepare: async () => ({ body: { email: uniqueEmail("colleague") } }),
     expected: (who) => (who === "none" ? 401 : who === "admin" ? 201 : 403),
   },
+  {
+    key: "PATCH /api/v1/firm/accounts/[userId]",
+    method: "PATCH",
+    writes: true,
+    load: () => import("@/app/api/v1/firm/accounts/[userId]/route"),
+    prepare: async () => ({ params: { userId: (await makeUser({ firmId })).id }, body: { disabled: true } }),
+    // Only the firm administrator; members of no consultancy are refused the same way.
+    expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403),
+  },
+  {
+    key: "DELETE /api/v1/projects/[projectId]/members/[userId]",
+    method: "DELETE",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/members/[userId]/route"),
+    prepare: async () => {
+      const member = await makeUser();
+      addMember(projectId, member.id, "client");
+      return { params: { projectId, userId: member.id } };
+    },
+    expected: projectRule("team.remove", 200),
+  },
+  {
+    key: "POST /api/v1/invitations/[token]/account",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/invitations/[token]/account/route"),
+    prepare: async () => ({ params: { token: (await freshInvitation()).token }, body: { name: "Walk newcomer (fictional)", password: WALK_PASSWORD, confirm: WALK_PASSWORD } }),
+    // The token is the proof: whoever holds it (signed in or not) creates the invited account.
+    expected: () => 201,
+  },
+  {
+    key: "POST /api/v1/password-reset",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/password-reset/route"),
+    prepare: async () => ({ body: { email: (await makeUser()).email } }),
+    expected: () => 200,
+  },
+  {
+    key: "POST /api/v1/password-reset/[token]",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/password-reset/[token]/route"),
+    prepare: async () => ({ params: { token: await freshResetToken() }, body: { password: WALK_PASSWORD, confirm: WALK_PASSWORD } }),
+    // The e-mailed token is the proof, whoever sends it.
+    expected: () => 200,
+  },
+  {
+    key: "POST /api/v1/me/password",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/me/password/route"),
+    prepare: async () => ({ body: { currentPassword: TEST_PASSWORD, password: WALK_PASSWORD, confirm: WALK_PASSWORD } }),
+    expected: signedIn(200),
+    restore: async (who) => {
+      if (who !== "none") await setPassword(emails[who], TEST_PASSWORD);
+    },
+  },
+  { key: "GET /api/v1/me/sessions", method: "GET", writes: false, load: () => import("@/app/api/v1/me/sessions/route"), expected: signedIn(200) },
+  {
+    key: "DELETE /api/v1/me/sessions/[sessionId]",
+    method: "DELETE",
+    writes: true,
+    load: () => import("@/app/api/v1/me/sessions/[sessionId]/route"),
+    // A second session of the actor's own (for no session: the consultant's, which is refused).
+    prepare: async (who) => ({ params: { sessionId: await secondSessionOf(who === "none" ? "consultant" : who) } }),
+    expected: signedIn(200),
+  },
+  {
+    key: "DELETE /api/v1/me/sessions",
+    method: "DELETE",
+    writes: true,
+    load: () => import("@/app/api/v1/me/sessions/route"),
+    expected: signedIn(200),
+    restore: async (who) => {
+      if (who !== "none") cookies[who] = await signIn(emails[who]);
+    },
+  },
 ];
+
+const WALK_PASSWORD = "walk-password-456";
+
+async function setPassword(email: string, password: string) {
+  const { hashPassword } = await import("better-auth/crypto");
+  const { account, user } = await import("@/db/schema");
+  const { eq } = await import("drizzle-orm");
+  const u = getDb().select().from(user).where(eq(user.email, email)).get()!;
+  getDb().update(account).set({ password: await hashPassword(password) }).where(eq(account.userId, u.id)).run();
+}
+
+async function secondSessionOf(who: Exclude<Who, "none">): Promise<string> {
+  const { session, user } = await import("@/db/schema");
+  const { eq } = await import("drizzle-orm");
+  const cookie = await signIn(emails[who]);
+  const { actorFromHeaders } = await import("@/lib/auth/session");
+  const actor = await actorFromHeaders(new Headers({ cookie }));
+  const u = getDb().select().from(user).where(eq(user.email, emails[who])).get()!;
+  expect(getDb().select().from(session).where(eq(session.userId, u.id)).all().length).toBeGreaterThan(1);
+  return actor!.sessionId!;
+}
+
+async function freshResetToken(): Promise<string> {
+  const u = await makeUser();
+  const { requestPasswordReset } = await import("@/lib/services/password");
+  await requestPasswordReset(null, { email: u.email }, `walk-${u.id}`);
+  const [mail] = await waitForMail(envHandle.mail, u.email);
+  return tokenIn(mail.text, "/reset-password");
+}
 
 function roomBody() {
   return { name: "Walk room", use: "speech", shape: "shoebox", length: 8, width: 6, height: 3 };
@@ -388,7 +501,7 @@ describe("role walk", () => {
         const status = endpoint.expected(who);
         it(`${who} → ${status}`, async () => {
           const mod = await endpoint.load();
-          const prep = (await endpoint.prepare?.()) ?? {};
+          const prep = (await endpoint.prepare?.(who)) ?? {};
           const before = tableCounts();
           const res = await call(mod[endpoint.method], {
             method: endpoint.method,
@@ -403,6 +516,7 @@ describe("role walk", () => {
             // A guard that refuses writes nothing.
             if (endpoint.writes) expect(tableCounts()).toEqual(before);
           }
+          await endpoint.restore?.(who);
         });
       }
     });
