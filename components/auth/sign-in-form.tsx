@@ -1,11 +1,24 @@
 "use client";
 
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { authClient } from "@/lib/auth/client";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+
+type SignInError = { status: number; code?: string; message?: string };
+
+// What the person is told for each refusal. Locked and disabled accounts carry the
+// server's own words (how long the pause lasts, who can re-enable the account).
+export function signInErrorMessage(err: SignInError): string {
+  if (err.status === 401) return "That e-mail and password do not match an account.";
+  if (err.status === 429 && err.code === "ACCOUNT_LOCKED" && err.message) return err.message;
+  if (err.status === 429) return "Too many sign-in attempts from your network. Wait a minute, then try again.";
+  if (err.status === 403 && err.message) return err.message;
+  return err.message ?? "Sign-in failed. Try again.";
+}
 
 export function SignInForm({ next, email: fixedEmail }: { next: string; email?: string }) {
   const router = useRouter();
@@ -28,7 +41,7 @@ export function SignInForm({ next, email: fixedEmail }: { next: string; email?: 
     const { error: err } = await authClient.signIn.email({ email, password });
     setBusy(false);
     if (err) {
-      setError(err.status === 401 ? "That e-mail and password do not match an account." : (err.message ?? "Sign-in failed. Try again."));
+      setError(signInErrorMessage(err));
       return;
     }
     router.replace(next);
@@ -48,6 +61,11 @@ export function SignInForm({ next, email: fixedEmail }: { next: string; email?: 
         error={fieldErrors.email}
       />
       <TextField label="Password" name="password" type="password" autoComplete="current-password" error={fieldErrors.password} />
+      <p className="-mt-3 text-right text-xs">
+        <Link href="/forgot-password" className="text-ink-soft underline underline-offset-2 hover:text-copper-deep">
+          Forgot your password?
+        </Link>
+      </p>
       <Button type="submit" disabled={busy}>
         {busy ? "Signing in…" : "Sign in"}
       </Button>

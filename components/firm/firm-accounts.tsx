@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
+import { AccountRow } from "./account-row";
 
 export function FirmAccounts({ initial }: { initial: FirmView }) {
   const { data = initial } = useQuery({ ...firmQuery(), initialData: initial });
@@ -15,6 +16,7 @@ export function FirmAccounts({ initial }: { initial: FirmView }) {
   const formRef = useRef<HTMLFormElement>(null);
   const [sent, setSent] = useState<string | null>(null);
   const err = invite.error instanceof ApiError ? invite.error : null;
+  const disabledCount = data.accounts.filter((a) => a.disabledAt).length;
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -28,7 +30,7 @@ export function FirmAccounts({ initial }: { initial: FirmView }) {
 
   return (
     <>
-      <TitleBlock kicker="Firm administration" title={data.firm.name} meta={`${data.accounts.length} accounts`} />
+      <TitleBlock kicker="Firm administration" title={data.firm.name} meta={`${data.accounts.length} accounts${disabledCount ? `, ${disabledCount} disabled` : ""}`} />
       <div className="grid gap-8 lg:grid-cols-[1.6fr_1fr]">
         <Sheet title="Accounts">
           <table className="w-full text-sm" data-testid="firm-accounts">
@@ -37,20 +39,16 @@ export function FirmAccounts({ initial }: { initial: FirmView }) {
                 <th className="py-2 pr-3 font-semibold">Name</th>
                 <th className="py-2 pr-3 font-semibold">E-mail</th>
                 <th className="py-2 pr-3 text-right font-semibold">Projects</th>
-                <th className="py-2 font-semibold">Since</th>
+                <th className="py-2 pr-3 font-semibold">Since</th>
+                <th className="py-2 pr-3 font-semibold">Status</th>
+                <th className="py-2 font-semibold">
+                  <span className="sr-only">Action</span>
+                </th>
               </tr>
             </thead>
             <tbody>
               {data.accounts.map((a) => (
-                <tr key={a.id} className="border-b border-ink/10">
-                  <td className="py-2.5 pr-3 font-medium">
-                    {a.name}
-                    {a.isFirmAdmin && <span className="ml-2 text-[11px] uppercase tracking-wider text-copper-deep">admin</span>}
-                  </td>
-                  <td className="py-2.5 pr-3 text-ink-soft">{a.email}</td>
-                  <td className="figures py-2.5 pr-3 text-right">{a.projects}</td>
-                  <td className="figures py-2.5 text-ink-soft">{new Date(a.since).toLocaleDateString("en-GB")}</td>
-                </tr>
+                <AccountRow key={a.id} account={a} />
               ))}
             </tbody>
           </table>

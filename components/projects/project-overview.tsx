@@ -13,8 +13,9 @@ import { Notice } from "@/components/ui/notice";
 import { InviteForm } from "./invite-form";
 import { OpenInvitations } from "./open-invitations";
 import { ClearanceForm } from "./clearance-form";
+import { TeamList } from "./team-list";
 
-export function ProjectOverviewView({ initial, units }: { initial: ProjectOverview; units: UnitPreference }) {
+export function ProjectOverviewView({ initial, units, myUserId }: { initial: ProjectOverview; units: UnitPreference; myUserId: string }) {
   const { data = initial } = useQuery({ ...projectQuery(initial.project.id), initialData: initial });
   const { project, myRole, team, rooms, invitations, mayDo } = data;
   return (
@@ -99,19 +100,7 @@ export function ProjectOverviewView({ initial, units }: { initial: ProjectOvervi
           </Sheet>
         </div>
         <div className="flex flex-col gap-8">
-          <Sheet title="Team" aside={<span className="figures text-xs text-ink-faint">{team.length}</span>}>
-            <ul className="flex flex-col divide-y divide-ink/10" data-testid="team-list">
-              {team.map((m) => (
-                <li key={m.userId} className="flex items-center justify-between gap-3 py-2.5">
-                  <span>
-                    <span className="block text-sm font-medium">{m.name}</span>
-                    <span className="block text-xs text-ink-faint">{m.email}</span>
-                  </span>
-                  <RoleBadge role={m.role} />
-                </li>
-              ))}
-            </ul>
-          </Sheet>
+          <TeamList projectId={project.id} team={team} mayRemove={mayDo.includes("team.remove")} myUserId={myUserId} />
           {invitations && (
             <Sheet title="Invite someone">
               <InviteForm projectId={project.id} />

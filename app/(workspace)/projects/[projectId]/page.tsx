@@ -12,7 +12,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const actor = await requirePageActor();
   try {
     const overview = getProjectOverview(actor, projectId);
-    return <ProjectOverviewView initial={overview} units={actor.unitPreference} />;
+    return <ProjectOverviewView initial={overview} units={actor.unitPreference} myUserId={actor.userId} />;
   } catch (e) {
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;
