@@ -31,9 +31,10 @@ export function minutesUntil(until: Date, now = Date.now()): number {
   return Math.max(1, Math.ceil((until.getTime() - now) / 60_000));
 }
 
+export const minutesText = (n: number) => `${n} minute${n === 1 ? "" : "s"}`;
+
 export function accountLockedMessage(until: Date): string {
-  const m = minutesUntil(until);
-  return `Too many wrong passwords for this account. Sign-in is paused for ${m} minute${m === 1 ? "" : "s"}; try again then, or reset your password by e-mail.`;
+  return `Too many wrong passwords for this account. Sign-in is paused for ${minutesText(minutesUntil(until))}; try again then, or reset your password by e-mail.`;
 }
 
 export const ACCOUNT_DISABLED_MESSAGE =

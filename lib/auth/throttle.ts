@@ -1,5 +1,5 @@
 import { and, eq, isNull, lt, or } from "drizzle-orm";
-import { transaction } from "@/db/client";
+import { getDb, transaction } from "@/db/client";
 import { throttle } from "@/db/schema";
 
 // Attempt counters in SQLite (table `throttle`), so limits survive a restart. better-sqlite3
@@ -32,7 +32,7 @@ export function consume(key: string, rule: Rule, now = Date.now()): Verdict {
 
 /** When the key's lock ends, or null when it is not locked. */
 export function lockedUntil(key: string, now = Date.now()): Date | null {
-  const row = transaction((tx) => tx.select({ lockedUntil: throttle.lockedUntil }).from(throttle).where(eq(throttle.key, key)).get());
+  const row = getDb().select({ lockedUntil: throttle.lockedUntil }).from(throttle).where(eq(throttle.key, key)).get();
   return row?.lockedUntil && row.lockedUntil > now ? new Date(row.lockedUntil) : null;
 }
 

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { getDb, transaction } from "@/db/client";
 import { account, session } from "@/db/schema";
 import { auth } from "@/lib/auth/server";
-import { LIMITS, minutesUntil, throttleKey } from "@/lib/auth/limits";
+import { LIMITS, minutesText, minutesUntil, throttleKey } from "@/lib/auth/limits";
 import { consume, forget, lockedUntil, recordFailure } from "@/lib/auth/throttle";
 import { gone, invalid, tooMany } from "@/lib/errors";
 import { deliver, enqueueMail } from "@/lib/mail/outbox";
@@ -20,14 +20,12 @@ import { recordAudit } from "./audit";
 export const RESET_REQUESTED =
   "If an account uses that address, a link to set a new password is on its way. It works once, for one hour.";
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
-
 export async function requestPasswordReset(actor: Actor | null, raw: unknown, clientAddress: string | null) {
   authorizeAccount(actor, "password.reset");
   const input = parseInput(requestPasswordResetSchema, raw);
   const verdict = consume(throttleKey.resetAddress(clientAddress), LIMITS.resetPerAddress);
   if (!verdict.allowed) {
-    throw tooMany(`Too many reset requests from your network. Try again in ${plural(Math.ceil((verdict.retryAfter ?? 60) / 60), "minute")}.`);
+    throw tooMany(`Too many reset requests from your network. Try again in ${minutesText(Math.ceil((verdict.retryAfter ?? 60) / 60))}.`);
   }
   // better-auth makes the single-use token (stored hashed, expiring after an hour) and calls
   // lib/auth/password-events.ts to mail it; server calls skip its per-address limiter, which
@@ -88,5 +86,5 @@ export async function changePassword(actor: Actor | null, raw: unknown) {
 }
 
 function lockedMessage(until: Date) {
-  return `Too many wrong current passwords. Try again in ${plural(minutesUntil(until), "minute")}, or sign out and set a new password by e-mail.`;
+  return `Too many wrong current passwords. Try again in ${minutesText(minutesUntil(until))}, or sign out and set a new password by e-mail.`;
 }

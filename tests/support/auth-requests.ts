@@ -1,4 +1,4 @@
-import { APP_URL } from "./http";
+import { APP_URL, bodyOf } from "./http";
 
 // Requests to better-auth's own endpoints (/api/auth/...), as a browser would send them.
 export async function authPost(path: string, body: unknown, headers: Record<string, string> = {}) {
@@ -10,13 +10,7 @@ export async function authPost(path: string, body: unknown, headers: Record<stri
       body: JSON.stringify(body),
     }),
   );
-  const text = await res.text();
-  let json: any = null;
-  try {
-    json = text ? JSON.parse(text) : null;
-  } catch {
-    json = text;
-  }
+  const json = await bodyOf(res);
   const cookie = res.headers
     .getSetCookie()
     .map((c) => c.split(";")[0])

@@ -18,14 +18,17 @@ export async function call(handler: Handler, opts: CallOptions = {}) {
   if (body !== undefined && !opts.form) headers.set("content-type", "application/json");
   const req = new Request(`${APP_URL}${opts.path ?? "/api/v1/test"}`, { method: opts.method ?? "GET", headers, body });
   const res = await handler(req, { params: Promise.resolve(opts.params ?? {}) });
+  return { status: res.status, json: await bodyOf(res), headers: res.headers };
+}
+
+/** The response body as JSON, or as text when it is not JSON, or null when empty. */
+export async function bodyOf(res: Response): Promise<any> {
   const text = await res.text();
-  let json: any = null;
   try {
-    json = text ? JSON.parse(text) : null;
+    return text ? JSON.parse(text) : null;
   } catch {
-    json = text;
+    return text;
   }
-  return { status: res.status, json, headers: res.headers };
 }
 
 // Sign in through better-auth's own endpoint and keep the session cookie.
