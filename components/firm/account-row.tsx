@@ -56,10 +56,18 @@ export function AccountRow({ account: a }: { account: FirmAccount }) {
               </p>
             ) : (
               <div className="flex flex-wrap items-center gap-3">
-                <p className="min-w-0 flex-1">
-                  Disable {a.name}? They are signed out at once and cannot sign in until you re-enable the account. Their pins, replies and
-                  decisions stay in the projects under their name.
-                </p>
+                <div className="min-w-0 flex-1">
+                  <p>
+                    Disable {a.name}? They are signed out at once and cannot sign in until you re-enable the account. Their pins, replies and
+                    decisions stay in the projects under their name.
+                  </p>
+                  {a.soleConsultantOn.length > 0 && (
+                    <p className="mt-1 font-medium">
+                      They are the only consultant on {a.soleConsultantOn.join(", ")}: nobody can change {a.soleConsultantOn.length === 1 ? "that project" : "those projects"}{" "}
+                      until they are re-enabled or another consultant is invited.
+                    </p>
+                  )}
+                </div>
                 <Button tone="danger" className="text-xs" onClick={() => apply(true)} disabled={setDisabled.isPending}>
                   {setDisabled.isPending ? "Disabling…" : "Disable the account"}
                 </Button>

@@ -42,7 +42,7 @@ export function SessionList({ initial }: { initial: SessionView[] }) {
                 {s.current && <span className="ml-2 text-[11px] uppercase tracking-wider text-copper-deep">this device</span>}
               </span>
               <span className="block text-xs text-ink-faint">
-                Signed in {when(s.signedInAt)} · last seen {when(s.lastSeenAt)}
+                Signed in {when(s.signedInAt)} · ends {when(s.expiresAt)}
                 {s.address ? ` · from ${s.address}` : ""}
               </span>
             </span>

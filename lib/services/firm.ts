@@ -1,6 +1,6 @@
 import { and, asc, count, eq, gt, isNull } from "drizzle-orm";
 import { getDb, transaction } from "@/db/client";
-import { firm, invitation, membership, session, user, type User } from "@/db/schema";
+import { firm, invitation, membership, project, session, user, type User } from "@/db/schema";
 import { conflict, notFound } from "@/lib/errors";
 import { deliver, enqueueMail } from "@/lib/mail/outbox";
 import { LINKS } from "@/lib/mail/links";
@@ -21,6 +21,8 @@ export type FirmAccount = {
   since: string;
   /** when a firm administrator disabled the account; null while it is active */
   disabledAt: string | null;
+  /** projects where this account is the only consultant: disabling it leaves them without one */
+  soleConsultantOn: string[];
 };
 
 function accountView(u: User, actorId: string): FirmAccount {
@@ -33,7 +35,21 @@ function accountView(u: User, actorId: string): FirmAccount {
     projects: getDb().select({ n: count() }).from(membership).where(eq(membership.userId, u.id)).get()?.n ?? 0,
     since: u.createdAt.toISOString(),
     disabledAt: u.disabledAt?.toISOString() ?? null,
+    soleConsultantOn: soleConsultantProjects(u.id),
   };
+}
+
+function soleConsultantProjects(userId: string): string[] {
+  const db = getDb();
+  return db
+    .select({ id: project.id, name: project.name })
+    .from(membership)
+    .innerJoin(project, eq(project.id, membership.projectId))
+    .where(and(eq(membership.userId, userId), eq(membership.role, "consultant")))
+    .orderBy(asc(project.name))
+    .all()
+    .filter((p) => db.select({ n: count() }).from(membership).where(and(eq(membership.projectId, p.id), eq(membership.role, "consultant"))).get()!.n === 1)
+    .map((p) => p.name);
 }
 
 export function getFirmAccounts(actor: Actor | null) {

@@ -18,7 +18,8 @@ export type SessionView = {
   device: string;
   address: string | null;
   signedInAt: string;
-  lastSeenAt: string;
+  /** when the session was last renewed (better-auth renews it at most once a day) */
+  renewedAt: string;
   expiresAt: string;
 };
 
@@ -36,7 +37,7 @@ export function listMySessions(actor: Actor | null): SessionView[] {
       device: describeUserAgent(s.userAgent),
       address: s.ipAddress,
       signedInAt: s.createdAt.toISOString(),
-      lastSeenAt: s.updatedAt.toISOString(),
+      renewedAt: s.updatedAt.toISOString(),
       expiresAt: s.expiresAt.toISOString(),
     }))
     .sort((x, y) => Number(y.current) - Number(x.current));

@@ -58,7 +58,18 @@ describe("disabling an account", () => {
     expect(mail.text).toMatch(/Ada Admin \(fictional\) disabled your Cavitas account/);
 
     const list = await call((await import("@/app/api/v1/firm/accounts/route")).GET, { cookie: adminCookie });
-    expect(list.json.accounts.find((a: { id: string }) => a.id === colleague.id).disabledAt).toBeTruthy();
+    const listed = list.json.accounts.find((a: { id: string }) => a.id === colleague.id);
+    expect(listed.disabledAt).toBeTruthy();
+    // Another consultant joined, so the project no longer hangs on this account alone.
+    expect(listed.soleConsultantOn).toEqual([]);
+  });
+
+  it("warns which projects would be left without a consultant", async () => {
+    const colleague = await makeUser({ firmId });
+    const project = makeProject(firmId, "Only-consultant project (fictional)");
+    addMember(project.id, colleague.id, "consultant");
+    const list = await call((await import("@/app/api/v1/firm/accounts/route")).GET, { cookie: adminCookie });
+    expect(list.json.accounts.find((a: { id: string }) => a.id === colleague.id).soleConsultantOn).toEqual(["Only-consultant project (fictional)"]);
   });
 
   it("re-enables the account: sign-in works again and the holder is told", async () => {

@@ -29,7 +29,7 @@ describe("sessions", () => {
     expect(res.status).toBe(200);
     expect(res.json.sessions).toHaveLength(2);
     expect(res.json.sessions.map((s: { current: boolean }) => s.current)).toEqual([true, false]);
-    expect(Object.keys(res.json.sessions[0]).sort()).toEqual(["address", "current", "device", "expiresAt", "id", "lastSeenAt", "signedInAt"]);
+    expect(Object.keys(res.json.sessions[0]).sort()).toEqual(["address", "current", "device", "expiresAt", "id", "renewedAt", "signedInAt"]);
     const token = decodeURIComponent(first.split("=")[1]).split(".")[0];
     expect(JSON.stringify(res.json)).not.toContain(token);
   });
