@@ -1,6 +1,5 @@
 "use client";
 
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { useCompletePasswordReset } from "@/lib/queries/account";
@@ -11,6 +10,7 @@ import { fieldErrorsOf } from "@/components/ui/field-errors";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { SpentResetLink } from "./spent-reset-link";
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
@@ -29,16 +29,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
     if (await complete.mutateAsync(parsed.data).catch(() => null)) router.replace("/sign-in?reset=done");
   }
 
-  if (err?.status === 410) {
-    return (
-      <Notice tone="caution" title="This link no longer works">
-        {err.message}{" "}
-        <Link className="underline underline-offset-2" href="/forgot-password">
-          Ask for a new link
-        </Link>
-      </Notice>
-    );
-  }
+  // Used up while the page was open (another tab, or an hour passed).
+  if (err?.status === 410) return <SpentResetLink message={err.message} />;
 
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-5" noValidate>

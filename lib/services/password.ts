@@ -35,7 +35,15 @@ export async function requestPasswordReset(actor: Actor | null, raw: unknown, cl
 }
 
 const tokenParam = z.string().min(1).max(200);
-const SPENT = "This link to set a new password has expired or has been used. Links work once, for one hour: ask for a new one.";
+export const SPENT = "This link to set a new password has expired or has been used. Links work once, for one hour: ask for a new one.";
+
+/** Whether a reset link can still be used, so its page can say so before anything is typed. */
+export async function resetLinkIsOpen(actor: Actor | null, token: string): Promise<boolean> {
+  authorizeAccount(actor, "password.reset");
+  if (!tokenParam.safeParse(token).success) return false;
+  const verification = await (await auth().$context).internalAdapter.findVerificationValue(`reset-password:${token}`);
+  return Boolean(verification && verification.expiresAt > new Date());
+}
 
 export async function completePasswordReset(actor: Actor | null, token: string, raw: unknown) {
   authorizeAccount(actor, "password.reset");

@@ -60,8 +60,12 @@ describe("password reset by e-mail", () => {
     const { verification } = await import("@/db/schema");
     expect(JSON.stringify(getDb().select().from(verification).all())).not.toContain(token);
 
+    const { resetLinkIsOpen } = await import("@/lib/services/password");
+    expect(await resetLinkIsOpen(null, token)).toBe(true);
     const done = await completeReset(token);
     expect(done.status).toBe(200);
+    expect(await resetLinkIsOpen(null, token)).toBe(false);
+    expect(await resetLinkIsOpen(null, "made-up-token")).toBe(false);
     expect((await call((await meRoute()).GET, { cookie: oldCookie })).status).toBe(401);
     expect((await authPost("/sign-in/email", { email: u.email, password: TEST_PASSWORD })).status).toBe(401);
     expect((await authPost("/sign-in/email", { email: u.email, password: NEW_PASSWORD })).status).toBe(200);
