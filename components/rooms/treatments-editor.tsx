@@ -78,7 +78,7 @@ export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, 
                       </select>
                     </td>
                     <td className="py-1.5 pr-2">
-                      <AreaField id={`treatment-area-${i}`} label="Panel area" m2={t.area} units={units} onChange={(area) => patch({ area })} error={fieldError(`treatments.${i}.area`)} />
+                      <AreaField label="Panel area" m2={t.area} units={units} onChange={(area) => patch({ area })} error={fieldError(`treatments.${i}.area`)} />
                     </td>
                     <td className="py-1.5 pr-2 text-[11px] text-ink-soft" data-testid={`need-${i}`}>
                       {need?.ok ? (
