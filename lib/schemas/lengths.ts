@@ -19,7 +19,7 @@ export function lengthField(what: string, limits: LengthLimits, units: UnitPrefe
 /** Why a length is refused, or null: not a number, negative, or outside its plausible range. */
 export function lengthRefusal(what: string, v: number, limits: LengthLimits, say: (m: number) => string): string | null {
   const { min, max, above = false, why } = limits;
-  const The = what.charAt(0).toUpperCase() + what.slice(1);
+  const The = `The ${what}`;
   if (!Number.isFinite(v)) return `Enter the ${what} as a number.`;
   if (v < 0 && min >= 0) return `${The} cannot be negative (${say(v)}).`;
   if (above ? v <= min : v < min) return `${The} must be ${above ? "more than" : "at least"} ${say(min)} (${say(v)} was given): ${why}.`;

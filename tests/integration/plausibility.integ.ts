@@ -65,7 +65,7 @@ describe("rooms: plausible sizes", () => {
 
   it("refuses an opening 500 m left of its wall", async () => {
     const surfaces = [{ key: "wall-a", name: "Wall A (length)", kind: "wall", width: 10, height: 3, finish: "plaster-on-masonry", openings: [{ kind: "door", name: "", x: -500, y: 0, width: 0.9, height: 2.1, material: "timber-door" }] }];
-    await refused(() => create({ ...shoebox, length: 10, width: 8, height: 3, surfaces }), "surfaces.0.openings.0.x", /Distance from the left cannot be negative \(−500 m\)/);
+    await refused(() => create({ ...shoebox, length: 10, width: 8, height: 3, surfaces }), "surfaces.0.openings.0.x", /The distance from the left cannot be negative \(−500 m\)/);
   });
 
   it("speaks feet and inches to a person who works in imperial units", async () => {
@@ -139,7 +139,7 @@ describe("build-ups: messages in the person's units", () => {
   });
 
   it("says a negative size is negative, and a metre typed for millimetres is too large", async () => {
-    await refused(() => save(spec({}, { depth: -0.2 }), "metric"), "spec.cavity.depth", /Cavity depth cannot be negative \(−200 mm\)/);
-    await refused(() => save(spec({ thickness: 16 }), "metric"), "spec.facing.thickness", /Plate thickness must be at most 100 mm \(16000 mm was given\)/);
+    await refused(() => save(spec({}, { depth: -0.2 }), "metric"), "spec.cavity.depth", /The cavity depth cannot be negative \(−200 mm\)/);
+    await refused(() => save(spec({ thickness: 16 }), "metric"), "spec.facing.thickness", /The plate thickness must be at most 100 mm \(16000 mm was given\)/);
   });
 });
