@@ -2,7 +2,7 @@ import { z } from "zod";
 import { ROOM_USES } from "@/lib/room-uses";
 import { OPENING_KINDS, SURFACE_KINDS } from "@/lib/rooms/geometry";
 import { targetSpecSchema } from "@/lib/rooms/target-spec";
-import { FOOT, decimal, type UnitPreference } from "@/lib/units";
+import { sayIn, type UnitPreference } from "@/lib/units";
 import { nameField } from "./common";
 import { lengthField, type LengthLimits } from "./lengths";
 
@@ -27,12 +27,11 @@ export const VOLUME_LIMITS = { min: 1, max: 1_000_000 };
 /** m²: at most a 300 m × 300 m surface. */
 export const TREATED_AREA_MAX = 90_000;
 
-const volumeText = (m3: number, units: UnitPreference) => (units === "metric" ? `${decimal(m3, 1)} m³` : `${decimal(m3 / FOOT ** 3, 0)} ft³`);
-const areaText = (m2: number, units: UnitPreference) => (units === "metric" ? `${decimal(m2, 2)} m²` : `${decimal(m2 / FOOT ** 2, 2)} ft²`);
 
 /** The room's schemas with messages in the person's units (the same limits for everyone). */
 export function roomSchemas(units: UnitPreference = "metric") {
   const length = (what: string, limits: LengthLimits) => lengthField(what, limits, units, "room");
+  const say = sayIn(units);
   const opening = z.object({
     kind: z.enum(OPENING_KINDS, { error: "Choose door, window, glazing, vent or other." }),
     name: z.string().trim().max(80, { error: "Keep the name under 80 characters." }).default(""),
@@ -55,15 +54,15 @@ export function roomSchemas(units: UnitPreference = "metric") {
     surfaceKey: z.string().min(1, { error: "Choose a surface." }),
     buildUpId: z.string().min(1, { error: "Choose a build-up." }),
     area: num("treated area").superRefine((v, ctx) => {
-      if (v <= 0) ctx.addIssue({ code: "custom", message: `The treated area must be more than ${areaText(0, units)}${v < 0 ? ": it cannot be negative" : ""}.` });
-      else if (v > TREATED_AREA_MAX) ctx.addIssue({ code: "custom", message: `The treated area must be at most ${areaText(TREATED_AREA_MAX, units)}, a 300 m × 300 m surface (${areaText(v, units)} was given).` });
+      if (v <= 0) ctx.addIssue({ code: "custom", message: `The treated area must be more than ${say.area(0)}${v < 0 ? ": it cannot be negative" : ""}.` });
+      else if (v > TREATED_AREA_MAX) ctx.addIssue({ code: "custom", message: `The treated area must be at most ${say.area(TREATED_AREA_MAX)}, a 300 m × 300 m surface (${say.area(v)} was given).` });
     }),
   });
   const volume = num("volume").superRefine((v, ctx) => {
     if (v < VOLUME_LIMITS.min || v > VOLUME_LIMITS.max) {
       ctx.addIssue({
         code: "custom",
-        message: `The volume must be between ${volumeText(VOLUME_LIMITS.min, units)} and ${volumeText(VOLUME_LIMITS.max, units)} (${volumeText(v, units)} was given): ${ROOM_SCALE}.`,
+        message: `The volume must be between ${say.volume(VOLUME_LIMITS.min)} and ${say.volume(VOLUME_LIMITS.max)} (${say.volume(v)} was given): ${ROOM_SCALE}.`,
       });
     }
   });
@@ -90,7 +89,7 @@ export function roomSchemas(units: UnitPreference = "metric") {
       ctx.addIssue({
         code: "custom",
         path: ["length"],
-        message: `This room would hold ${volumeText(m3, units)}, more than ${volumeText(VOLUME_LIMITS.max, units)}: ${ROOM_SCALE}. Check the length, width and height.`,
+        message: `This room would hold ${say.volume(m3)}, more than ${say.volume(VOLUME_LIMITS.max)}: ${ROOM_SCALE}. Check the length, width and height.`,
       });
     }
   };
