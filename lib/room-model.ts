@@ -12,6 +12,7 @@ import { defaultTargetSpec, type TargetSpec } from "@/lib/rooms/target-spec";
 import { targetFor, type Target } from "@/lib/rooms/targets";
 import { validateRoom } from "@/lib/rooms/validation";
 import type { RoomFields } from "@/lib/schemas/room";
+import { sayIn, type UnitPreference } from "@/lib/units";
 
 // From stored rows or editor input to the room domain (lib/rooms) and back: the geometry, its
 // surfaces with openings, the target and the reverberation check.
@@ -101,8 +102,10 @@ export function runCheck(args: CheckArgs): { check: CheckResult; target: Target 
   return { check: checkRoom(input), target, issues };
 }
 
-export function roomIssues(fields: RoomFields, surfaces: Surface[], panels: ReadonlyMap<string, unknown>, lookup: MaterialLookup): Issue[] {
-  const issues: Issue[] = validateRoom({ geometry: geometryOf(fields), surfaces, air: { temperature: fields.temperature, humidity: fields.humidity, pressure: fields.pressure } });
+export function roomIssues(fields: RoomFields, surfaces: Surface[], panels: ReadonlyMap<string, unknown>, lookup: MaterialLookup, units: UnitPreference = "metric"): Issue[] {
+  const say = sayIn(units);
+  const air = { temperature: fields.temperature, humidity: fields.humidity, pressure: fields.pressure };
+  const issues: Issue[] = validateRoom({ geometry: geometryOf(fields), surfaces, air }, say);
   if (fields.shape === "free" && surfaces.length === 0) issues.push({ field: "surfaces", message: "List the room's surfaces (walls, ceiling, floor).", severity: "error" });
   const keys = new Set<string>();
   surfaces.forEach((s, i) => {
@@ -118,13 +121,13 @@ export function roomIssues(fields: RoomFields, surfaces: Surface[], panels: Read
       issues.push({ field: `treatments.${i}.surfaceKey`, message: "That surface is not in this room.", severity: "error" });
       return;
     }
-    if (!(t.area > 0)) issues.push({ field: `treatments.${i}.area`, message: "The treated area must be greater than 0 m².", severity: "error" });
+    if (!(t.area > 0)) issues.push({ field: `treatments.${i}.area`, message: `The treated area must be greater than ${say.area(0)}.`, severity: "error" });
     const total = (placed.get(s.key) ?? 0) + t.area;
     placed.set(s.key, total);
     if (total > netArea(s) + 1e-9) {
       issues.push({
         field: `treatments.${i}.area`,
-        message: `${total.toFixed(2)} m² of panels on ${s.name} is more than its ${netArea(s).toFixed(2)} m² without openings.`,
+        message: `${say.area(total)} of panels on ${s.name} is more than its ${say.area(netArea(s))} without openings.`,
         severity: "error",
       });
     }

@@ -2,7 +2,9 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useDeferredValue, useMemo, useState } from "react";
-import { evaluateInputSchema, fieldErrors, runEvaluate, type EvaluateInput, type EvaluateOutput } from "@/lib/acoustics/contract";
+import { runEvaluate, type EvaluateOutput } from "@/lib/acoustics/contract";
+import { buildUpSchemas } from "@/lib/schemas/build-up";
+import { fieldIssues } from "@/lib/schemas/parse";
 import type { BuildUpView } from "@/lib/services/build-ups";
 import { buildUpsQuery, fetchBuildUp, useSaveBuildUp } from "@/lib/queries/build-ups";
 import { ApiError } from "@/lib/queries/api";
@@ -12,6 +14,7 @@ import { Button } from "@/components/ui/button";
 import { SaveNotices } from "@/components/ui/save-notices";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
 import { SelectField, TextField } from "@/components/ui/field";
+import { RefusalScope, RefusedNotice, useRefusals } from "@/components/ui/refusals";
 import { BuildUpInputs, type Draft } from "./build-up-inputs";
 import { RatingsPanel, WarningsList } from "./ratings-panel";
 
@@ -24,10 +27,10 @@ function curvesOf(result: EvaluateOutput, prefix: string, label: string, compare
   const normal = result.thirdOctaves.map((b) => ({ f: b.f, value: b.normal }));
   const diffuse = result.thirdOctaves.map((b) => ({ f: b.f, value: b.diffuse }));
   return compare
-    ? [{ id: `${prefix}-diffuse`, label: `${label}: diffuse`, tone: "sage", dashed: true, points: diffuse }]
+    ? [{ id: `${prefix}-diffuse`, label: `Compared, ${label}: diffuse`, tone: "sage", line: "dotted", points: diffuse }]
     : [
         { id: `${prefix}-diffuse`, label: `${label}: diffuse (field incidence 0–78°)`, tone: "copper", points: diffuse },
-        { id: `${prefix}-normal`, label: `${label}: normal incidence`, tone: "ink", dashed: true, points: normal },
+        { id: `${prefix}-normal`, label: `${label}: normal incidence`, tone: "ink", line: "dashed", points: normal },
       ];
 }
 
@@ -39,27 +42,35 @@ export function Bench({ initial, units, mayEdit }: { initial: BuildUpView; units
   const [compareId, setCompareId] = useState("");
   const [conflict, setConflict] = useState<string | null>(null);
   const save = useSaveBuildUp(initial.projectId, initial.id);
+  const refusals = useRefusals();
   const { data: library = [] } = useQuery(buildUpsQuery(initial.projectId));
 
+  // The same schema as the server's, with messages in the person's units.
+  const schemas = useMemo(() => buildUpSchemas(units), [units]);
   const spec = useDeferredValue(draft.spec);
   const evaluation = useMemo(() => {
-    const parsed = evaluateInputSchema.safeParse(spec);
-    if (!parsed.success) return { errors: fieldErrors(parsed.error.issues), result: null };
-    return { errors: [], result: runEvaluate(parsed.data as EvaluateInput) };
-  }, [spec]);
+    const parsed = schemas.spec.safeParse(spec);
+    return parsed.success ? { result: runEvaluate(parsed.data) } : { result: null };
+  }, [spec, schemas]);
+  const issues = useMemo(() => {
+    const parsed = schemas.create.safeParse(draft);
+    return parsed.success ? [] : fieldIssues(parsed.error);
+  }, [draft, schemas]);
   const [lastGood, setLastGood] = useState<EvaluateOutput>(initial.result);
   if (evaluation.result && evaluation.result !== lastGood) setLastGood(evaluation.result);
   const result = evaluation.result ?? lastGood;
 
   const dirty = JSON.stringify(draft) !== JSON.stringify(draftOf(saved));
+  const fireDeclared = draft.fireStandard !== "none" && draft.fireClass.trim() !== "";
   const serverError = save.error instanceof ApiError ? save.error : null;
-  const fieldError = (field: string) =>
-    evaluation.errors.find((e) => `spec.${e.field}` === field)?.message ?? serverError?.fieldMessage(field);
+  const fieldError = (field: string) => issues.find((e) => e.field === field)?.message ?? serverError?.fieldMessage(field);
 
   const compare = library.find((b) => b.id === compareId && b.id !== initial.id);
   const curves = [...curvesOf(result, "this", draft.name || "This build-up"), ...(compare ? curvesOf(compare.result, "other", compare.name, true) : [])];
 
   async function onSave() {
+    // A refused field holds text that is not on record: nothing is sent until it is fixed.
+    if (refusals.now().length > 0 || issues.length > 0) return;
     setConflict(null);
     try {
       const next = await save.mutateAsync({ ...draft, version: saved.version });
@@ -84,25 +95,38 @@ export function Bench({ initial, units, mayEdit }: { initial: BuildUpView; units
         kicker="Bench"
         title={draft.name || "Untitled build-up"}
         meta={
-          <span data-testid="save-state">
-            {dirty ? "Unsaved changes" : `Saved, version ${saved.version}`}
-            {!mayEdit && " · read only for your role"}
-          </span>
+          <>
+            <span data-testid="save-state">
+              {dirty ? "Unsaved changes" : `Saved, version ${saved.version}`}
+              {!mayEdit && " · read only for your role"}
+            </span>
+            {" · "}
+            <a href="#fire" className={`underline underline-offset-4 ${fireDeclared ? "" : "font-semibold text-ink"}`} data-testid="fire-status">
+              {fireDeclared ? `fire class ${draft.fireClass} declared (${draft.fireStandard})` : "no fire class declared"}
+            </a>
+          </>
         }
         actions={
           mayEdit ? (
-            <Button onClick={onSave} disabled={!dirty || save.isPending || evaluation.errors.length > 0}>
+            <Button onClick={onSave} disabled={!dirty || save.isPending || issues.length > 0 || refusals.refused.length > 0}>
               {save.isPending ? "Saving…" : "Save build-up"}
             </Button>
           ) : undefined
         }
       />
       <SaveNotices what="build-up" conflict={conflict} onReload={reload} error={serverError} />
+      {mayEdit && (
+        <div className="mb-6 empty:hidden">
+          <RefusedNotice refused={refusals.refused} action="saved" />
+        </div>
+      )}
       <div className="grid gap-8 lg:grid-cols-[300px_1fr]">
-        <fieldset disabled={!mayEdit} className="flex flex-col gap-6">
-          <TextField label="Name" name="name" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} error={serverError?.fieldMessage("name")} />
-          <BuildUpInputs draft={draft} onChange={setDraft} units={units} fieldError={fieldError} projectId={initial.projectId} fireReport={saved.fireReport} />
-        </fieldset>
+        <RefusalScope refusals={refusals}>
+          <fieldset disabled={!mayEdit} data-read-only={mayEdit ? undefined : true} className="flex flex-col gap-6" data-testid="bench-inputs">
+            <TextField label="Name" name="name" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} error={fieldError("name")} />
+            <BuildUpInputs draft={draft} onChange={setDraft} units={units} fieldError={fieldError} projectId={initial.projectId} fireReport={saved.fireReport} />
+          </fieldset>
+        </RefusalScope>
         <div className="flex min-w-0 flex-col gap-6">
           <Sheet title="Absorption, one-third octaves">
             <AbsorptionChart

@@ -7,8 +7,10 @@ import type { AttachmentSummary } from "@/lib/services/attachments";
 import { uploadFile } from "@/lib/queries/build-ups";
 import { ApiError } from "@/lib/queries/api";
 import type { UnitPreference } from "@/lib/units";
-import { SelectField, TextField } from "@/components/ui/field";
+import { FIELD_LABEL, FieldNote, SelectField, TextField } from "@/components/ui/field";
 import { MeasureField } from "@/components/ui/measure-field";
+import { Notice } from "@/components/ui/notice";
+import { NumberField } from "@/components/ui/number-field";
 import { facingOfKind } from "./facing-defaults";
 
 export type Draft = BuildUpFields;
@@ -23,9 +25,9 @@ type Props = {
 
 const mm = (n: number) => n / 1000;
 
-function Group({ title, children }: { title: string; children: React.ReactNode }) {
+function Group({ title, children, id }: { title: string; children: React.ReactNode; id?: string }) {
   return (
-    <div className="flex flex-col gap-3 border-t border-ink/20 pt-3">
+    <div id={id} className="flex scroll-mt-6 flex-col gap-3 border-t border-ink/20 pt-3">
       <h3 className="text-[11px] font-semibold uppercase tracking-[0.16em] text-copper-deep">{title}</h3>
       {children}
     </div>
@@ -53,16 +55,17 @@ export function BuildUpInputs({ draft, onChange, units, fieldError, projectId, f
             { value: "micro-perforated", label: "Micro-perforated" },
           ]}
         />
-        <MeasureField label="Plate thickness" metres={f.thickness} units={units} onChange={(v) => setFacing({ thickness: v })} range={{ min: mm(0.2), max: mm(40), step: mm(0.1) }} error={fieldError("spec.facing.thickness")} />
+        <MeasureField label="Plate thickness" scale="fine" metres={f.thickness} units={units} onChange={(v) => setFacing({ thickness: v })} range={{ min: mm(0.2), max: mm(40), step: mm(0.1) }} error={fieldError("spec.facing.thickness")} testId="plate-thickness" />
         {f.kind === "slots" ? (
           <>
-            <MeasureField label="Slot width" metres={f.slotWidth} units={units} onChange={(v) => setFacing({ slotWidth: v })} range={{ min: mm(0.5), max: mm(30), step: mm(0.1) }} error={fieldError("spec.facing.slotWidth")} testId="slot-width" />
-            <MeasureField label="Slot pitch" metres={f.slotPitch} units={units} onChange={(v) => setFacing({ slotPitch: v })} range={{ min: mm(2), max: mm(200), step: mm(0.5) }} error={fieldError("spec.facing.slotPitch")} />
+            <MeasureField label="Slot width" scale="fine" metres={f.slotWidth} units={units} onChange={(v) => setFacing({ slotWidth: v })} range={{ min: mm(0.5), max: mm(30), step: mm(0.1) }} error={fieldError("spec.facing.slotWidth")} testId="slot-width" />
+            <MeasureField label="Slot pitch" scale="fine" metres={f.slotPitch} units={units} onChange={(v) => setFacing({ slotPitch: v })} range={{ min: mm(2), max: mm(200), step: mm(0.5) }} error={fieldError("spec.facing.slotPitch")} testId="slot-pitch" />
           </>
         ) : (
           <>
             <MeasureField
               label="Hole diameter"
+              scale="fine"
               metres={f.holeDiameter}
               units={units}
               onChange={(v) => setFacing({ holeDiameter: v })}
@@ -72,6 +75,7 @@ export function BuildUpInputs({ draft, onChange, units, fieldError, projectId, f
             />
             <MeasureField
               label="Pitch"
+              scale="fine"
               metres={f.pitch}
               units={units}
               onChange={(v) => setFacing({ pitch: v })}
@@ -121,15 +125,17 @@ export function BuildUpInputs({ draft, onChange, units, fieldError, projectId, f
         />
         {infill && (
           <>
-            <MeasureField label="Infill thickness" metres={infill.thickness} units={units} onChange={(v) => setSpec({ infill: { ...infill, thickness: v } })} range={{ min: mm(5), max: mm(300), step: mm(1) }} error={fieldError("spec.infill.thickness")} />
-            <TextField
-              label="Flow resistivity (Pa·s/m²)"
+            <MeasureField label="Infill thickness" metres={infill.thickness} units={units} onChange={(v) => setSpec({ infill: { ...infill, thickness: v } })} range={{ min: mm(5), max: mm(300), step: mm(1) }} error={fieldError("spec.infill.thickness")} testId="infill-thickness" />
+            <NumberField
+              label="Flow resistivity"
+              what="flow resistivity"
+              unit="Pa·s/m²"
               name="infill.flowResistivity"
-              type="number"
-              inputMode="numeric"
-              value={String(infill.flowResistivity)}
-              onChange={(e) => setSpec({ infill: { ...infill, flowResistivity: Number(e.target.value) } })}
+              decimals={0}
+              value={infill.flowResistivity}
+              onChange={(v) => setSpec({ infill: { ...infill, flowResistivity: v } })}
               error={fieldError("spec.infill.flowResistivity")}
+              testId="flow-resistivity"
             />
             <SelectField
               label="Position"
@@ -157,10 +163,10 @@ export function BuildUpInputs({ draft, onChange, units, fieldError, projectId, f
 
       <Group title="Module">
         <div className="grid grid-cols-2 gap-3">
-          <MeasureField label="Width" metres={draft.moduleWidth} units={units} onChange={(v) => onChange({ ...draft, moduleWidth: v })} error={fieldError("moduleWidth")} />
-          <MeasureField label="Height" metres={draft.moduleHeight} units={units} onChange={(v) => onChange({ ...draft, moduleHeight: v })} error={fieldError("moduleHeight")} />
-          <MeasureField label="Side border" metres={draft.borderX} units={units} onChange={(v) => onChange({ ...draft, borderX: v })} error={fieldError("borderX")} />
-          <MeasureField label="End border" metres={draft.borderY} units={units} onChange={(v) => onChange({ ...draft, borderY: v })} error={fieldError("borderY")} />
+          <MeasureField label="Width" metres={draft.moduleWidth} units={units} onChange={(v) => onChange({ ...draft, moduleWidth: v })} error={fieldError("moduleWidth")} testId="module-width" />
+          <MeasureField label="Height" metres={draft.moduleHeight} units={units} onChange={(v) => onChange({ ...draft, moduleHeight: v })} error={fieldError("moduleHeight")} testId="module-height" />
+          <MeasureField label="Side border" metres={draft.borderX} units={units} onChange={(v) => onChange({ ...draft, borderX: v })} error={fieldError("borderX")} testId="border-x" />
+          <MeasureField label="End border" metres={draft.borderY} units={units} onChange={(v) => onChange({ ...draft, borderY: v })} error={fieldError("borderY")} testId="border-y" />
         </div>
         <TextField label="Facing material" name="facingMaterial" value={draft.facingMaterial} onChange={(e) => onChange({ ...draft, facingMaterial: e.target.value })} error={fieldError("facingMaterial")} />
       </Group>
@@ -175,7 +181,7 @@ function FireGroup({ draft, onChange, fieldError, projectId, fireReport }: Omit<
   const [uploadError, setUploadError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   return (
-    <Group title="Fire classification (declared)">
+    <Group title="Fire classification (declared)" id="fire">
       <SelectField
         label="Standard"
         name="fireStandard"
@@ -191,8 +197,9 @@ function FireGroup({ draft, onChange, fieldError, projectId, fireReport }: Omit<
       {draft.fireStandard !== "none" && (
         <TextField label="Declared class" name="fireClass" placeholder="B-s1,d0 or Class A" value={draft.fireClass} onChange={(e) => onChange({ ...draft, fireClass: e.target.value })} error={fieldError("fireClass")} />
       )}
+      <FireCaution declared={draft.fireStandard !== "none" && draft.fireClass.trim() !== ""} />
       <div className="flex flex-col gap-1">
-        <label className="text-xs font-semibold uppercase tracking-wider text-ink-soft" htmlFor="fire-report">
+        <label className={FIELD_LABEL} htmlFor="fire-report">
           Test report (PDF)
         </label>
         {report && (
@@ -222,11 +229,26 @@ function FireGroup({ draft, onChange, fieldError, projectId, fireReport }: Omit<
             }
           }}
         />
-        {(uploadError ?? fieldError("fireReportId")) && <p role="alert" className="text-xs font-medium text-fault">{uploadError ?? fieldError("fireReportId")}</p>}
-        <p className="text-[11px] leading-relaxed text-ink-faint">
-          A class belongs to the tested assembly as built. What is required depends on the occupancy and the jurisdiction; the governing code and the authority having jurisdiction decide.
-        </p>
+        <FieldNote id="fire-report" error={uploadError ?? fieldError("fireReportId")} />
       </div>
     </Group>
+  );
+}
+
+// Fire performance of interior finishes is a life-safety matter (SAFETY.md): said in full,
+// at the point where the class is declared, not in small print at the end.
+function FireCaution({ declared }: { declared: boolean }) {
+  return (
+    <div data-testid="fire-caution">
+      <Notice tone="caution" title={declared ? "Fire: check the class against the code" : "Fire: no class declared yet"}>
+        <p className="leading-relaxed">
+          {declared
+            ? "The class belongs to the assembly as tested and built (facing, coating, infill, cavity and substrate), from the manufacturer's test report."
+            : "Submittals will flag this build-up until a class from a test report of the product as built is declared here."}{" "}
+          The class required depends on the occupancy, where the finish is, sprinklers and the jurisdiction: the governing code and the authority having jurisdiction decide,
+          not Cavitas.
+        </p>
+      </Notice>
+    </div>
   );
 }

@@ -49,7 +49,8 @@ export function SelectionPanel({ selected, units, editable, buildUps, onChange, 
           </option>
         ))}
       </select>
-      <div className="grid grid-cols-2 gap-2">
+      {/* Feet and inches ("3 ft 11 1/4 in") need the panel's full width. */}
+      <div className={`grid gap-2 ${units === "imperial" ? "grid-cols-1" : "grid-cols-2"}`}>
         <MeasureField label="From the left" metres={p.x} units={units} small={false} onChange={(x) => onChange(p.id, { x })} testId="panel-x" />
         <MeasureField label="Above the datum" metres={p.y} units={units} small={false} onChange={(y) => onChange(p.id, { y })} testId="panel-y" />
         <MeasureField label="Width" metres={p.width} units={units} onChange={(width) => onChange(p.id, { width })} testId="panel-width" />

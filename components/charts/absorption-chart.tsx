@@ -1,10 +1,14 @@
 import { hzLabel, logScale, OCTAVE_TICKS } from "./log-axis";
 
 export type CurveTone = "copper" | "ink" | "faint" | "sage";
-export type Curve = { id: string; label: string; tone: CurveTone; dashed?: boolean; points: { f: number; value: number }[] };
+/** solid, dashed or dotted: curves told apart by their line as well as their colour */
+export type CurveLine = "solid" | "dashed" | "dotted";
+export type Curve = { id: string; label: string; tone: CurveTone; line?: CurveLine; /** @deprecated use line */ dashed?: boolean; points: { f: number; value: number }[] };
+const lineOf = (c: Curve): CurveLine => c.line ?? (c.dashed ? "dashed" : "solid");
 export type Marker = { f: number; label: string };
 
-const STROKE: Record<CurveTone, string> = { copper: "#b0602f", ink: "#1a2740", faint: "#7c8598", sage: "#4f6f52" };
+const STROKE: Record<CurveTone, string> = { copper: "#b0602f", ink: "#1a2740", faint: "#7c8598", sage: "#3f7a4a" };
+const DASH: Record<CurveLine, string | undefined> = { solid: undefined, dashed: "7 4", dotted: "1.5 3.5" };
 
 // Absorption against frequency: log axis 50 Hz – 5 kHz labelled at octave centres, α from 0 to
 // 1 (or higher, if a value exceeds 1, as ASTM values may). Drawn in Cavitas's own sheet style.
@@ -55,8 +59,9 @@ export function AbsorptionChart({ curves, markers = [], height = 300 }: { curves
           data-curve={c.id}
           fill="none"
           stroke={STROKE[c.tone]}
-          strokeWidth={c.tone === "copper" ? 2.4 : 1.6}
-          strokeDasharray={c.dashed ? "6 4" : undefined}
+          strokeWidth={c.tone === "copper" ? 2.4 : lineOf(c) === "dotted" ? 2.6 : 1.6}
+          strokeDasharray={DASH[lineOf(c)]}
+          strokeLinecap={lineOf(c) === "dotted" ? "round" : undefined}
           strokeLinejoin="round"
           points={c.points.map((p) => `${x(p.f).toFixed(1)},${y(Math.max(0, p.value)).toFixed(1)}`).join(" ")}
         />
@@ -70,8 +75,8 @@ export function ChartLegend({ curves }: { curves: Curve[] }) {
     <ul className="flex flex-wrap gap-4 text-xs text-ink-soft">
       {curves.map((c) => (
         <li key={c.id} className="flex items-center gap-2">
-          <svg width="22" height="8" aria-hidden>
-            <line x1="0" x2="22" y1="4" y2="4" stroke={STROKE[c.tone]} strokeWidth="2.4" strokeDasharray={c.dashed ? "5 3" : undefined} />
+          <svg width="24" height="8" aria-hidden>
+            <line x1="1" x2="23" y1="4" y2="4" stroke={STROKE[c.tone]} strokeWidth="2.4" strokeDasharray={DASH[lineOf(c)]} strokeLinecap={lineOf(c) === "dotted" ? "round" : undefined} />
           </svg>
           {c.label}
         </li>

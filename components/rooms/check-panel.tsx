@@ -1,5 +1,6 @@
 import type { CheckResult } from "@/lib/rooms/check";
 import type { Target } from "@/lib/rooms/targets";
+import { FOOT, type UnitPreference } from "@/lib/units";
 import { hzLabel } from "@/components/charts/log-axis";
 import { ReverbChart, ReverbLegend } from "@/components/charts/reverb-chart";
 import { Notice } from "@/components/ui/notice";
@@ -8,10 +9,14 @@ import { StatusBadge } from "./status-badge";
 
 const s = (v: number | null | undefined) => (v === null || v === undefined ? "—" : v.toFixed(2));
 
+// Absorption is an area: m² of a perfect absorber (metric sabins), or ft² (sabins).
+const ABSORPTION = { metric: { unit: "m²", words: "m² of absorption (metric sabins)", per: 1 }, imperial: { unit: "ft²", words: "ft² of absorption (sabins)", per: FOOT * FOOT } };
+
 // The Check: per octave the predicted time before and after treatment (Sabine and Eyring),
 // the target with its band, the standing and the absorption still lacking, in a chart, a table
 // and plain sentences.
-export function CheckPanel({ check, target }: { check: CheckResult; target: Target | null }) {
+export function CheckPanel({ check, target, units }: { check: CheckResult; target: Target | null; units: UnitPreference }) {
+  const absorption = ABSORPTION[units];
   if (!check.ok) {
     return (
       <Notice tone="caution" title="The check cannot run until the room is complete">
@@ -51,7 +56,7 @@ export function CheckPanel({ check, target }: { check: CheckResult; target: Targ
                 <th className="py-1.5 font-semibold">target s</th>
                 <th className="py-1.5 font-semibold">before S / E</th>
                 <th className="py-1.5 font-semibold">after S / E</th>
-                <th className="py-1.5 font-semibold">lacks m²</th>
+                <th className="py-1.5 font-semibold">lacks, {absorption.unit}</th>
                 <th className="py-1.5 pl-2 text-left font-semibold">standing</th>
               </tr>
             </thead>
@@ -68,7 +73,7 @@ export function CheckPanel({ check, target }: { check: CheckResult; target: Targ
                     {o.after ? `${s(o.after.sabine)} / ${s(o.after.eyring)}` : "no data"}
                   </td>
                   <td className="py-1.5" data-testid={`lacks-${o.f}`}>
-                    {o.after?.shortfall ? o.after.shortfall.toFixed(1) : "—"}
+                    {o.after?.shortfall ? (o.after.shortfall / absorption.per).toFixed(1) : "—"}
                   </td>
                   <td className="py-1.5 pl-2 text-left">
                     <StatusBadge status={o.status} />
@@ -77,7 +82,7 @@ export function CheckPanel({ check, target }: { check: CheckResult; target: Targ
               ))}
             </tbody>
           </table>
-          <p className="mt-2 text-[11px] text-ink-faint">S = Sabine, E = Eyring, with air absorption (ISO 9613-1). Lacks: absorption the room still needs to reach the band&apos;s upper limit, in m² sabins.</p>
+          <p className="mt-2 text-[11px] text-ink-faint">S = Sabine, E = Eyring, with air absorption (ISO 9613-1). Lacks: absorption the room still needs to reach the band&apos;s upper limit, in {absorption.words}.</p>
         </Sheet>
         {target && (
           <Sheet title="Target">

@@ -8,11 +8,14 @@ import type { RoomSummary } from "@/lib/services/rooms";
 import { roomsQuery, useCreateRoom } from "@/lib/queries/rooms";
 import { ApiError } from "@/lib/queries/api";
 import { ROOM_USES, ROOM_USE_WORDS } from "@/lib/room-uses";
+import { roomSchemas } from "@/lib/schemas/room";
+import { fieldIssues } from "@/lib/schemas/parse";
 import { formatVolume, type UnitPreference } from "@/lib/units";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { MeasureField } from "@/components/ui/measure-field";
 import { Notice } from "@/components/ui/notice";
+import { RefusalScope, RefusedNotice, useRefusals } from "@/components/ui/refusals";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
 import { StatusBadge } from "./status-badge";
 
@@ -74,36 +77,50 @@ export function RoomList({ projectId, initial, mayEdit, units }: { projectId: st
 function NewRoomForm({ projectId, units, onCancel }: { projectId: string; units: UnitPreference; onCancel: () => void }) {
   const router = useRouter();
   const create = useCreateRoom(projectId);
+  const refusals = useRefusals();
   const [dims, setDims] = useState({ length: 10, width: 8, height: 3 });
+  const [local, setLocal] = useState<{ field: string; message: string }[]>([]);
   const err = create.error instanceof ApiError ? create.error : null;
+  const fieldMessage = (field: string) => local.find((i) => i.field === field)?.message ?? err?.fieldMessage(field);
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
+    // What is sent is what is on screen: not while a field holds text that was refused.
+    if (refusals.now().length > 0) return;
     const form = new FormData(e.currentTarget);
-    const made = await create
-      .mutateAsync({ name: String(form.get("name") ?? ""), use: String(form.get("use")), shape: "shoebox", ...dims })
-      .catch(() => null);
+    const input = { name: String(form.get("name") ?? ""), use: String(form.get("use")), shape: "shoebox", ...dims };
+    // The server's own schema, run here first, in the person's units.
+    const checked = roomSchemas(units).create.safeParse(input);
+    setLocal(checked.success ? [] : fieldIssues(checked.error));
+    if (!checked.success) return;
+    const made = await create.mutateAsync(input).catch(() => null);
     if (made) router.push(`/projects/${projectId}/rooms/${made.id}`);
   }
 
   return (
     <Sheet title="New room" className="mb-8">
-      <form onSubmit={onSubmit} className="grid gap-4 md:grid-cols-[2fr_1.4fr_1fr_1fr_1fr]" noValidate>
+      <RefusalScope refusals={refusals}>
+      <form onSubmit={onSubmit} className="grid gap-4 md:grid-cols-[2fr_1.4fr_1fr_1fr_1fr]" noValidate data-testid="new-room">
         {err && !err.issues.length && (
           <div className="md:col-span-5">
             <Notice tone="fault">{err.message}</Notice>
           </div>
         )}
-        <TextField label="Room name" name="name" error={err?.fieldMessage("name")} autoFocus />
+        <TextField label="Room name" name="name" error={fieldMessage("name")} autoFocus />
         <SelectField label="Use" name="use" defaultValue="speech" options={ROOM_USES.map((u) => ({ value: u, label: ROOM_USE_WORDS[u] }))} />
-        <MeasureField label="Length" metres={dims.length} units={units} small={false} onChange={(v) => setDims({ ...dims, length: v })} error={err?.fieldMessage("length")} />
-        <MeasureField label="Width" metres={dims.width} units={units} small={false} onChange={(v) => setDims({ ...dims, width: v })} error={err?.fieldMessage("width")} />
-        <MeasureField label="Height" metres={dims.height} units={units} small={false} onChange={(v) => setDims({ ...dims, height: v })} error={err?.fieldMessage("height")} />
+        <MeasureField label="Length" metres={dims.length} units={units} scale="room" onChange={(v) => setDims((d) => ({ ...d, length: v }))} error={fieldMessage("length")} />
+        <MeasureField label="Width" metres={dims.width} units={units} scale="room" onChange={(v) => setDims((d) => ({ ...d, width: v }))} error={fieldMessage("width")} />
+        <MeasureField label="Height" metres={dims.height} units={units} scale="room" onChange={(v) => setDims((d) => ({ ...d, height: v }))} error={fieldMessage("height")} />
+        {refusals.refused.length > 0 && (
+          <div className="md:col-span-5">
+            <RefusedNotice refused={refusals.refused} action="created" />
+          </div>
+        )}
         <p className="text-xs text-ink-faint md:col-span-5">
           A shoebox makes the four walls, the ceiling and the floor with their sizes; finishes, openings and a free-form surface list are set on the room&apos;s page.
         </p>
         <div className="flex gap-3 md:col-span-5">
-          <Button type="submit" disabled={create.isPending}>
+          <Button type="submit" disabled={create.isPending || refusals.refused.length > 0}>
             {create.isPending ? "Creating…" : "Create room"}
           </Button>
           <Button type="button" tone="quiet" onClick={onCancel}>
@@ -111,6 +128,7 @@ function NewRoomForm({ projectId, units, onCancel }: { projectId: string; units:
           </Button>
         </div>
       </form>
+      </RefusalScope>
     </Sheet>
   );
 }

@@ -5,7 +5,8 @@ import { useQuery } from "@tanstack/react-query";
 import type { RoomView } from "@/lib/services/rooms";
 import type { MaterialView } from "@/lib/services/materials";
 import type { BuildUpView } from "@/lib/services/build-ups";
-import type { RoomFields } from "@/lib/schemas/room";
+import { roomSchemas, type RoomFields } from "@/lib/schemas/room";
+import { fieldIssues } from "@/lib/schemas/parse";
 import { roomIssues, runCheck, surfacesFor, checkInputFor, type PanelAlpha } from "@/lib/room-model";
 import { octaveAlphaFromBands } from "@/lib/rooms/octaves";
 import { roomQuery, useSaveRoom } from "@/lib/queries/rooms";
@@ -15,6 +16,7 @@ import { formatArea, formatVolume, type UnitPreference } from "@/lib/units";
 import Link from "next/link";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { RefusalScope, RefusedNotice, useRefusals } from "@/components/ui/refusals";
 import { SaveNotices } from "@/components/ui/save-notices";
 import { TitleBlock } from "@/components/ui/sheet";
 import { CheckPanel } from "./check-panel";
@@ -37,6 +39,7 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
   const [base, setBase] = useState(initial.version);
   const [conflict, setConflict] = useState<string | null>(null);
   const save = useSaveRoom(initial.projectId, initial.id);
+  const refusals = useRefusals();
 
   const panels = useMemo(() => new Map<string, PanelAlpha>(buildUps.map((b) => [b.id, { name: b.name, alpha: octaveAlphaFromBands(b.result.octaves) }])), [buildUps]);
   const lookup = useMemo(() => {
@@ -44,7 +47,14 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
     return (key: string) => byKey.get(key);
   }, [materials]);
   const surfaces = useMemo(() => surfacesFor(draft), [draft]);
-  const issues = useMemo(() => roomIssues(draft, surfaces, panels, lookup), [draft, surfaces, panels, lookup]);
+  // The server's own checks, run here first: the shared schema (sizes a practitioner would
+  // accept) and what the room's numbers must satisfy together, in the person's units.
+  const schemas = useMemo(() => roomSchemas(units), [units]);
+  const issues = useMemo(() => {
+    const shape = schemas.create.safeParse(draft);
+    const refused = shape.success ? [] : fieldIssues(shape.error).map((i) => ({ ...i, severity: "error" as const }));
+    return [...refused, ...roomIssues(draft, surfaces, panels, lookup, units)];
+  }, [schemas, draft, surfaces, panels, lookup, units]);
   const errors = issues.filter((i) => i.severity === "error");
   const live = useMemo(
     () => (errors.length ? null : runCheck({ fields: draft, surfaces, treatments: [...draft.treatments, ...saved.placed], panels, lookup })),
@@ -60,6 +70,8 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
   const dirty = JSON.stringify(draft) !== JSON.stringify(fieldsOf(saved)) || base !== saved.version;
 
   async function onSave() {
+    // A refused field holds text that is not on record: nothing is sent until it is fixed.
+    if (refusals.now().length > 0 || errors.length > 0) return;
     setConflict(null);
     try {
       const next = await save.mutateAsync({ ...draft, version: base });
@@ -89,17 +101,23 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
         meta={
           <span data-testid="room-meta">
             {ROOM_USE_WORDS[draft.use]} · {volume ? formatVolume(volume, units) : "volume unknown"} · {dirty ? "unsaved changes" : `saved, version ${base}`}
+            {!mayEdit && " · read only for your role"}
           </span>
         }
         actions={
           mayEdit ? (
-            <Button onClick={onSave} disabled={!dirty || save.isPending || errors.length > 0}>
+            <Button onClick={onSave} disabled={!dirty || save.isPending || errors.length > 0 || refusals.refused.length > 0}>
               {save.isPending ? "Saving…" : "Save room"}
             </Button>
           ) : undefined
         }
       />
       <SaveNotices what="room" conflict={conflict} onReload={reload} error={serverError} />
+      {mayEdit && (
+        <div className="mb-6 empty:hidden">
+          <RefusedNotice refused={refusals.refused} action="saved" />
+        </div>
+      )}
       <nav aria-label="Elevation boards" className="mb-6 flex flex-wrap items-center gap-2 text-xs" data-testid="board-links">
         <span className="font-semibold uppercase tracking-wider text-ink-soft">Boards</span>
         {saved.surfaces.map((s) => {
@@ -114,19 +132,21 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
         {saved.openPins > 0 && <span className="ml-2 text-copper-deep">{saved.openPins} open {saved.openPins === 1 ? "pin" : "pins"}</span>}
       </nav>
       {live ? (
-        <CheckPanel check={live.check} target={live.target} />
+        <CheckPanel check={live.check} target={live.target} units={units} />
       ) : (
         <Notice tone="caution" title="Fix the marked fields to see the check">
           {errors.length} {errors.length === 1 ? "field needs" : "fields need"} attention below. Nothing has been saved or lost.
         </Notice>
       )}
-      <fieldset disabled={!mayEdit} className="mt-8 grid gap-6 xl:grid-cols-[1fr_1.6fr]">
-        <RoomFieldsEditor draft={draft} onChange={setDraft} units={units} fieldError={fieldError} />
-        <div className="flex flex-col gap-6">
-          <SurfacesEditor draft={draft} onChange={setDraft} surfaces={surfaces} materials={materials} units={units} fieldError={fieldError} />
-          <TreatmentsEditor draft={draft} onChange={setDraft} surfaces={surfaces} buildUps={buildUps} panels={panels} checkInput={checkInput} units={units} fieldError={fieldError} />
-        </div>
-      </fieldset>
+      <RefusalScope refusals={refusals}>
+        <fieldset disabled={!mayEdit} data-read-only={mayEdit ? undefined : true} className="mt-8 grid gap-6 xl:grid-cols-[1fr_1.6fr]" data-testid="room-inputs">
+          <RoomFieldsEditor draft={draft} onChange={setDraft} units={units} fieldError={fieldError} />
+          <div className="flex flex-col gap-6">
+            <SurfacesEditor draft={draft} onChange={setDraft} surfaces={surfaces} materials={materials} units={units} fieldError={fieldError} editable={mayEdit} />
+            <TreatmentsEditor draft={draft} onChange={setDraft} surfaces={surfaces} buildUps={buildUps} panels={panels} checkInput={checkInput} units={units} fieldError={fieldError} editable={mayEdit} />
+          </div>
+        </fieldset>
+      </RefusalScope>
     </>
   );
 }

@@ -20,10 +20,12 @@ type Props = {
   checkInput: CheckInput | null;
   units: UnitPreference;
   fieldError: (f: string) => string | undefined;
+  /** false: shown to someone who may not edit the room, without add and remove actions */
+  editable: boolean;
 };
 
 // Treatment counted by area, until panels are placed one by one on the elevation board.
-export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, checkInput, units, fieldError }: Props) {
+export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, checkInput, units, fieldError, editable }: Props) {
   const set = (treatments: RoomFields["treatments"]) => onChange({ ...draft, treatments });
   const byKey = new Map(surfaces.map((s) => [s.key, s]));
   return (
@@ -53,12 +55,12 @@ export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, 
                 const patch = (p: Partial<typeof t>) => set(draft.treatments.map((x, j) => (j === i ? { ...x, ...p } : x)));
                 const panel = panels.get(t.buildUpId);
                 const others = checkInput ? { ...checkInput, treatments: checkInput.treatments.filter((_, j) => j !== i) } : null;
-                const need = others && panel ? panelAreaForRoom(others, { surface: t.surfaceKey, alpha: panel.alpha }) : null;
+                const need = others && panel ? panelAreaForRoom(others, { surface: t.surfaceKey, alpha: panel.alpha }, (m2) => formatArea(m2, units)) : null;
                 const surface = byKey.get(t.surfaceKey);
                 return (
                   <tr key={i} className="border-b border-ink/10 align-top" data-treatment={i}>
                     <td className="py-1.5 pr-2">
-                      <select aria-label="Treated surface" value={t.surfaceKey} onChange={(e) => patch({ surfaceKey: e.target.value })} className="w-full rounded-sheet border border-paper-edge bg-white/70 px-1 py-1">
+                      <select aria-label="Treated surface" value={t.surfaceKey} onChange={(e) => patch({ surfaceKey: e.target.value })} className="w-full min-w-[10.5rem] rounded-sheet border border-paper-edge bg-white/70 px-1 py-1">
                         {surfaces.map((s) => (
                           <option key={s.key} value={s.key}>
                             {s.name}
@@ -69,7 +71,7 @@ export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, 
                       {fieldError(`treatments.${i}.surfaceKey`) && <p className="text-[11px] text-fault">{fieldError(`treatments.${i}.surfaceKey`)}</p>}
                     </td>
                     <td className="py-1.5 pr-2">
-                      <select aria-label="Build-up" value={t.buildUpId} onChange={(e) => patch({ buildUpId: e.target.value })} className="w-full rounded-sheet border border-paper-edge bg-white/70 px-1 py-1">
+                      <select aria-label="Build-up" value={t.buildUpId} onChange={(e) => patch({ buildUpId: e.target.value })} className="w-full min-w-[12rem] rounded-sheet border border-paper-edge bg-white/70 px-1 py-1">
                         {buildUps.map((b) => (
                           <option key={b.id} value={b.id}>
                             {b.name}
@@ -78,14 +80,14 @@ export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, 
                       </select>
                     </td>
                     <td className="py-1.5 pr-2">
-                      <AreaField id={`treatment-area-${i}`} label="Panel area" m2={t.area} units={units} onChange={(area) => patch({ area })} error={fieldError(`treatments.${i}.area`)} />
+                      <AreaField label="Panel area" m2={t.area} units={units} onChange={(area) => patch({ area })} error={fieldError(`treatments.${i}.area`)} />
                     </td>
                     <td className="py-1.5 pr-2 text-[11px] text-ink-soft" data-testid={`need-${i}`}>
                       {need?.ok ? (
                         <>
                           <span className="figures font-semibold text-ink">{need.need.area === null ? "cannot" : formatArea(need.need.area, units)}</span>
                           <span className="block">{need.need.sentence}</span>
-                          {need.need.area !== null && need.need.fits && Math.abs(need.need.area - t.area) > 0.05 && (
+                          {editable && need.need.area !== null && need.need.fits && Math.abs(need.need.area - t.area) > 0.05 && (
                             <button type="button" className="mt-0.5 text-copper-deep hover:underline" onClick={() => patch({ area: Math.ceil(need.need.area! * 10) / 10 })}>
                               Use this area
                             </button>
@@ -96,22 +98,27 @@ export function TreatmentsEditor({ draft, onChange, surfaces, buildUps, panels, 
                       )}
                     </td>
                     <td className="py-1.5 text-right">
-                      <button type="button" className="text-fault hover:underline" onClick={() => set(draft.treatments.filter((_, j) => j !== i))}>
-                        Remove
-                      </button>
+                      {editable && (
+                        <button type="button" className="text-fault hover:underline" onClick={() => set(draft.treatments.filter((_, j) => j !== i))}>
+                          Remove<span className="sr-only"> treated area {i + 1}</span>
+                        </button>
+                      )}
                     </td>
                   </tr>
                 );
               })}
             </tbody>
           </table>
-          <button
-            type="button"
-            className="mt-3 text-sm text-copper-deep hover:underline"
-            onClick={() => set([...draft.treatments, { surfaceKey: surfaces[0]?.key ?? "", buildUpId: buildUps[0].id, area: 5 }])}
-          >
-            + Add treated area
-          </button>
+          {editable && (
+            <button
+              type="button"
+              className="mt-3 text-sm text-copper-deep hover:underline"
+              onClick={() => set([...draft.treatments, { surfaceKey: surfaces[0]?.key ?? "", buildUpId: buildUps[0].id, area: 5 }])}
+            >
+              + Add treated area
+            </button>
+          )}
+          {!editable && draft.treatments.length === 0 && <p className="mt-3 text-sm text-ink-soft">No treatment entered by area.</p>}
         </>
       )}
     </Sheet>

@@ -13,10 +13,10 @@ import { Notice } from "@/components/ui/notice";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
 
 const SAMPLES = [
-  { label: "Panel thickness", metres: 0.019, small: true },
-  { label: "Cavity depth", metres: 0.2, small: true },
-  { label: "Wall length", metres: 12.5 },
-];
+  { label: "Hole diameter", metres: 0.008, scale: "fine" },
+  { label: "Cavity depth", metres: 0.2, scale: "panel" },
+  { label: "Wall length", metres: 12.5, scale: "room" },
+] as const;
 
 export function SettingsForm({ initial }: { initial: Me }) {
   const router = useRouter();
@@ -65,7 +65,7 @@ export function SettingsForm({ initial }: { initial: Me }) {
                   <span className="figures text-xs text-ink-soft">
                     {SAMPLES.map((s) => (
                       <span key={s.label} className="block">
-                        {s.label}: {formatLength(s.metres, u, { small: s.small })}
+                        {s.label}: {formatLength(s.metres, u, { scale: s.scale })}
                       </span>
                     ))}
                     <span className="block">Treated area: {formatArea(24, u)}</span>

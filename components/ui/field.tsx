@@ -2,18 +2,22 @@ import type { InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react
 
 type Common = { label: string; name: string; error?: string; hint?: ReactNode };
 
+// Labels keep their case: units such as Pa·s/m² or ft³ must read as written.
+export const FIELD_LABEL = "text-xs font-semibold tracking-wide text-ink-soft";
+
 function FieldLabel({ id, label }: { id: string; label: string }) {
   return (
-    <label htmlFor={id} className="text-xs font-semibold uppercase tracking-wider text-ink-soft">
+    <label htmlFor={id} className={FIELD_LABEL}>
       {label}
     </label>
   );
 }
 
-function FieldNote({ id, error, hint }: { id: string; error?: string; hint?: ReactNode }) {
+/** A field's refusal (announced to assistive technology) or its hint. */
+export function FieldNote({ id, error, hint, small = false }: { id: string; error?: string | null; hint?: ReactNode; small?: boolean }) {
   if (error) {
     return (
-      <p id={`${id}-error`} role="alert" className="text-xs font-medium text-fault">
+      <p id={`${id}-error`} role="alert" className={`${small ? "text-[11px]" : "text-xs"} font-medium text-fault`}>
         {error}
       </p>
     );
@@ -51,14 +55,15 @@ export function SelectField({
 }: Common & SelectHTMLAttributes<HTMLSelectElement> & { options: { value: string; label: string }[] }) {
   const id = rest.id ?? `f-${name}`;
   return (
-    <div className={`flex flex-col gap-1 ${className}`}>
+    <div className={`flex min-w-0 flex-col gap-1 ${className}`}>
       <FieldLabel id={id} label={label} />
       <select
         id={id}
         name={name}
         aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
         {...rest}
-        className={`rounded-sheet border bg-white/70 px-3 py-2 text-sm text-ink focus:border-copper focus:outline-none ${error ? "border-fault" : "border-paper-edge"}`}
+        className={`w-full rounded-sheet border bg-white/70 px-3 py-2 text-sm text-ink focus:border-copper focus:outline-none ${error ? "border-fault" : "border-paper-edge"}`}
       >
         {options.map((o) => (
           <option key={o.value} value={o.value}>

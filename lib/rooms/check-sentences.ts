@@ -4,7 +4,9 @@ import type { CheckMean, CheckOctave } from "./check";
 import { octaveName } from "./octaves";
 
 const seconds = (s: number) => `${s.toFixed(2)} s`;
-const sabins = (a: number) => `${a.toFixed(1)} m² sabins`;
+// Absorption is an area of perfect absorber; "m² sabins" would mix a metric area with the
+// imperial unit's name.
+const absorption = (a: number) => `${a.toFixed(1)} m² of absorption (metric sabins)`;
 
 /** A run of neighbouring octaves as named in a list: "250 Hz to 2 kHz" from three on, else each. */
 function runNames(run: number[]): string[] {
@@ -41,7 +43,7 @@ export function checkSentences(result: {
     const state = o.after;
     if (!state) continue;
     if (state.status === "over") {
-      const lack = state.shortfall !== null && state.shortfall > 0 ? `; it lacks ${sabins(state.shortfall)} of absorption` : "";
+      const lack = state.shortfall !== null && state.shortfall > 0 ? `; it lacks ${absorption(state.shortfall)}` : "";
       sentences.push(`At ${octaveName(o.f)} ${room} rings ${seconds(state.excess)} longer than ${allows}${lack}.`);
     } else if (state.status === "under") {
       sentences.push(`At ${octaveName(o.f)} ${room} rings ${seconds(-state.excess)} shorter than ${allows}: it has more absorption there than the target wants.`);

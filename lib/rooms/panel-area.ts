@@ -25,6 +25,8 @@ export interface PanelNeed extends PanelArea {
 export function panelAreaForRoom(
   input: CheckInput,
   panel: { surface: string; alpha: OctaveRecord },
+  /** how the sentence quotes an area, m² → text (the person's units); m² unless given */
+  area: (m2: number) => string = (m2) => quote(m2, "m²"),
 ): { ok: true; need: PanelNeed; issues: Issue[] } | { ok: false; issues: Issue[] } {
   const issues = validateCheckInput(input);
   const surface = input.surfaces.find((s) => s.key === panel.surface);
@@ -33,11 +35,11 @@ export function panelAreaForRoom(
   const method = input.method ?? "sabine";
   const room = { volume: input.volume, surfaces: roomSurfaces(input, true), air: input.air, method };
   const shortfall = absorptionShortfall({ ...room, target: upperLimits(input.target.perOctave) });
-  const area = panelAreaNeeded({ shortfall, panelAlpha: panel.alpha, coveredAlpha: surface.alpha });
+  const needed = panelAreaNeeded({ shortfall, panelAlpha: panel.alpha, coveredAlpha: surface.alpha });
   const available = Math.max(0, surface.area - (treatedAreas(input.treatments).get(surface.key) ?? 0));
-  const fits = area.area !== null && area.area <= available * (1 + 1e-9);
-  const overshoot = area.area === null ? null : firstOvershoot(shortfall, panel.alpha, surface.alpha, area.area);
-  return { ok: true, need: { ...area, available, fits, overshoot, sentence: sentence(area, available, fits, overshoot, surface.name) }, issues };
+  const fits = needed.area !== null && needed.area <= available * (1 + 1e-9);
+  const overshoot = needed.area === null ? null : firstOvershoot(shortfall, panel.alpha, surface.alpha, needed.area);
+  return { ok: true, need: { ...needed, available, fits, overshoot, sentence: sentence(needed, available, fits, overshoot, surface.name, area) }, issues };
 }
 
 /**
@@ -62,16 +64,16 @@ function firstOvershoot(
   return tightest;
 }
 
-function sentence(area: PanelArea, available: number, fits: boolean, overshoot: PanelNeed["overshoot"], surfaceName: string): string {
+function sentence(area: PanelArea, available: number, fits: boolean, overshoot: PanelNeed["overshoot"], surfaceName: string, say: (m2: number) => string): string {
   if (area.area === null) {
     return `This build-up cannot close the shortfall at ${octaveName(area.limitingOctave as number)}: there it absorbs no more than the finish of ${surfaceName} it would cover.`;
   }
   if (area.area === 0) return "Nothing is lacking: no more panel area is needed.";
-  const where = `${quote(area.area, "m²")} of this build-up on ${surfaceName} closes the shortfall; ${octaveName(area.limitingOctave as number)} sets the area`;
+  const where = `${say(area.area)} of this build-up on ${surfaceName} closes the shortfall; ${octaveName(area.limitingOctave as number)} sets the area`;
   const problems = [
-    ...(fits ? [] : [`only ${quote(available, "m²")} of ${surfaceName} is free`]),
+    ...(fits ? [] : [`only ${say(available)} of ${surfaceName} is free`]),
     ...(overshoot
-      ? [`at ${octaveName(overshoot.f)} it absorbs less than the finish it covers, and more than ${quote(overshoot.maxArea, "m²")} of it pushes that octave over its limit`]
+      ? [`at ${octaveName(overshoot.f)} it absorbs less than the finish it covers, and more than ${say(overshoot.maxArea)} of it pushes that octave over its limit`]
       : []),
   ];
   return problems.length ? `${where}, but ${problems.join("; and ")}.` : `${where}.`;

@@ -5,7 +5,7 @@ import { conflict, invalid, notFound } from "@/lib/errors";
 import { ROLE_WORDS } from "@/lib/permissions";
 import type { ProjectRole } from "@/lib/roles";
 import { parseInput } from "@/lib/schemas/parse";
-import { drawingSchema, pinInputSchema, replyInputSchema, resolveInputSchema, saveBoardSchema } from "@/lib/schemas/board";
+import { boardSchemas, drawingSchema, replyInputSchema, resolveInputSchema } from "@/lib/schemas/board";
 import { deliver, enqueueMail } from "@/lib/mail/outbox";
 import { env } from "@/lib/env";
 import type { EvaluateInput } from "@/lib/acoustics/contract";
@@ -128,7 +128,7 @@ export function getBoard(actor: Actor | null, projectId: string, roomId: string,
 export function saveBoard(actor: Actor | null, projectId: string, roomId: string, surfaceKey: string, raw: unknown): BoardView {
   const access = authorize(actor, projectId, "design.edit");
   const s = loadSurface(projectId, roomId, surfaceKey);
-  const input = parseInput(saveBoardSchema, raw);
+  const input = parseInput(boardSchemas(access.actor.unitPreference, s).save, raw);
   const known = new Set(getDb().select({ id: buildUp.id }).from(buildUp).where(eq(buildUp.projectId, projectId)).all().map((b) => b.id));
   const issues: { field: string; message: string }[] = [];
   const codes = new Set<string>();
@@ -195,7 +195,7 @@ function boardLink(projectId: string, roomId: string, surfaceKey: string, pinNum
 export async function createPin(actor: Actor | null, projectId: string, roomId: string, surfaceKey: string, raw: unknown) {
   const access = authorize(actor, projectId, "pin.write");
   const s = loadSurface(projectId, roomId, surfaceKey);
-  const input = parseInput(pinInputSchema, raw);
+  const input = parseInput(boardSchemas(access.actor.unitPreference, s).pin, raw);
   const roomName = getDb().select({ name: room.name }).from(room).where(eq(room.id, roomId)).get()!.name;
   const { made, mails } = transaction((tx) => {
     const b = ensureBoard(tx, s.id);

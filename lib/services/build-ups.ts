@@ -4,7 +4,7 @@ import { attachment, buildUp, placement, treatment, type BuildUp } from "@/db/sc
 import { runEvaluate, type EvaluateInput, type EvaluateOutput } from "@/lib/acoustics/contract";
 import { conflict, notFound } from "@/lib/errors";
 import { parseInput } from "@/lib/schemas/parse";
-import { createBuildUpSchema, updateBuildUpSchema, type BuildUpFields } from "@/lib/schemas/build-up";
+import { buildUpSchemas, type BuildUpFields } from "@/lib/schemas/build-up";
 import type { Actor } from "./actor";
 import { authorize } from "./guard";
 import { recordAudit } from "./audit";
@@ -80,7 +80,7 @@ const columns = (input: BuildUpFields) => ({
 
 export function createBuildUp(actor: Actor | null, projectId: string, raw: unknown): BuildUpView {
   const access = authorize(actor, projectId, "design.edit");
-  const input = parseInput(createBuildUpSchema, raw);
+  const input = parseInput(buildUpSchemas(access.actor.unitPreference).create, raw);
   if (input.fireReportId) requireAttachment(projectId, input.fireReportId, "fire-report", "fireReportId");
   const row = transaction((tx) => {
     const row = tx.insert(buildUp).values({ projectId, ...columns(input) }).returning().get();
@@ -93,7 +93,7 @@ export function createBuildUp(actor: Actor | null, projectId: string, raw: unkno
 export function updateBuildUp(actor: Actor | null, projectId: string, buildUpId: string, raw: unknown): BuildUpView {
   const access = authorize(actor, projectId, "design.edit");
   const current = load(projectId, buildUpId);
-  const input = parseInput(updateBuildUpSchema, raw);
+  const input = parseInput(buildUpSchemas(access.actor.unitPreference).update, raw);
   if (input.fireReportId) requireAttachment(projectId, input.fireReportId, "fire-report", "fireReportId");
   const row = transaction((tx) => {
     // Only the version the editor started from may be replaced; a stale save changes nothing.

@@ -7,7 +7,8 @@ import { netArea, grossArea, roomVolume, type Surface } from "@/lib/rooms/geomet
 import type { Issue } from "@/lib/rooms/issues";
 import type { Target } from "@/lib/rooms/targets";
 import { parseInput } from "@/lib/schemas/parse";
-import { createRoomSchema, updateRoomSchema, type RoomFields } from "@/lib/schemas/room";
+import { roomSchemas, type RoomFields } from "@/lib/schemas/room";
+import type { UnitPreference } from "@/lib/units";
 import type { Actor } from "./actor";
 import { authorize } from "./guard";
 import { recordAudit } from "./audit";
@@ -139,10 +140,11 @@ export function getRoom(actor: Actor | null, projectId: string, roomId: string):
   return view(row, storedFields(row), projectPanels(projectId));
 }
 
-function validated(projectId: string, fields: RoomFields): { surfaces: Surface[]; panels: Map<string, PanelAlpha> } {
+// What the room's numbers must satisfy together, in the person's units.
+function validated(projectId: string, fields: RoomFields, units: UnitPreference): { surfaces: Surface[]; panels: Map<string, PanelAlpha> } {
   const panels = projectPanels(projectId);
   const surfaces = surfacesFor(fields);
-  const errors = roomIssues(fields, surfaces, panels, materialLookup(projectId)).filter((i) => i.severity === "error");
+  const errors = roomIssues(fields, surfaces, panels, materialLookup(projectId), units).filter((i) => i.severity === "error");
   if (errors.length) throw invalid(errors.map((e) => ({ field: e.field, message: e.message })));
   return { surfaces, panels };
 }
@@ -187,8 +189,9 @@ function writeChildren(tx: Tx, roomId: string, surfaces: Surface[], treatments: 
 
 export function createRoom(actor: Actor | null, projectId: string, raw: unknown): RoomView {
   const access = authorize(actor, projectId, "design.edit");
-  const fields = parseInput(createRoomSchema, raw);
-  const { surfaces, panels } = validated(projectId, fields);
+  const units = access.actor.unitPreference;
+  const fields = parseInput(roomSchemas(units).create, raw);
+  const { surfaces, panels } = validated(projectId, fields, units);
   const row = transaction((tx) => {
     const row = tx.insert(room).values({ projectId, ...roomColumns(fields) }).returning().get();
     writeChildren(tx, row.id, surfaces, fields.treatments);
@@ -201,9 +204,10 @@ export function createRoom(actor: Actor | null, projectId: string, raw: unknown)
 export function updateRoom(actor: Actor | null, projectId: string, roomId: string, raw: unknown): RoomView {
   const access = authorize(actor, projectId, "design.edit");
   const current = loadRoom(projectId, roomId);
-  const input = parseInput(updateRoomSchema, raw);
+  const units = access.actor.unitPreference;
+  const input = parseInput(roomSchemas(units).update, raw);
   const { version, ...fields } = input;
-  const { surfaces, panels } = validated(projectId, fields);
+  const { surfaces, panels } = validated(projectId, fields, units);
   const row = transaction((tx) => {
     // Only the version the editor started from may be replaced, so two editors never
     // silently overwrite each other; a stale save changes nothing.

@@ -113,8 +113,9 @@ describe("unit preference", () => {
     await s.page.getByRole("link", { name: "Projects" }).click();
     await s.page.getByRole("link", { name: ARTS }).click();
     await s.page.getByTestId("room-table").waitFor();
-    // 12 m = 39 ft 4 1/2 in to the nearest 1/8 in (1 in = 25.4 mm exactly, by definition).
-    expect(await s.page.getByTestId("room-table").textContent()).toContain("39 ft 4 1/2 in × 29 ft 6 3/8 in × 14 ft 9 1/8 in");
+    // 12 m = 472.441 in = 39 ft 4 7/16 in to the nearest 1/16 in (1 in = 25.4 mm exactly, by
+    // definition); 9 m = 29 ft 6.331 in → 6 5/16 in; 4.5 m = 14 ft 9.165 in → 9 3/16 in.
+    expect(await s.page.getByTestId("room-table").textContent()).toContain("39 ft 4 7/16 in × 29 ft 6 5/16 in × 14 ft 9 3/16 in");
     // Put it back for the other tests that read metric values.
     await s.page.getByRole("link", { name: "Settings" }).click();
     await s.page.getByLabel("Metric (mm, m)").check();

@@ -14,13 +14,13 @@ export function makeFirm(name = "Test firm (fictional)") {
   return getDb().insert(firm).values({ name }).returning().get();
 }
 
-export async function makeUser(opts: { firmId?: string | null; isFirmAdmin?: boolean; email?: string; name?: string } = {}) {
+export async function makeUser(opts: { firmId?: string | null; isFirmAdmin?: boolean; email?: string; name?: string; unitPreference?: "metric" | "imperial" } = {}) {
   passwordHash ??= await hashPassword(TEST_PASSWORD);
   const id = `u-${next()}`;
   const email = opts.email ?? `${id}@example.test`;
   const row = getDb()
     .insert(user)
-    .values({ id, name: opts.name ?? `Person ${id} (fictional)`, email, emailVerified: true, firmId: opts.firmId ?? null, isFirmAdmin: opts.isFirmAdmin ?? false })
+    .values({ id, name: opts.name ?? `Person ${id} (fictional)`, email, emailVerified: true, firmId: opts.firmId ?? null, isFirmAdmin: opts.isFirmAdmin ?? false, unitPreference: opts.unitPreference ?? "metric" })
     .returning()
     .get();
   getDb().insert(account).values({ id: `a-${id}`, accountId: id, providerId: "credential", userId: id, password: passwordHash }).run();

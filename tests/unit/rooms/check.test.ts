@@ -160,7 +160,7 @@ describe("status, shortfall and sentences against DIN 18041 group A2", () => {
     const under = 0.65 * 0.74 - byHand(4000, 0.5);
     const mean = (byHand(500, 0.195) + byHand(1000, 0.195)) / 2;
     expect(result.sentences).toEqual([
-      `At 125 Hz the room rings ${over.toFixed(2)} s longer than the target band allows; it lacks ${lack.toFixed(1)} m² sabins of absorption.`,
+      `At 125 Hz the room rings ${over.toFixed(2)} s longer than the target band allows; it lacks ${lack.toFixed(1)} m² of absorption (metric sabins).`,
       `At 4 kHz the room rings ${under.toFixed(2)} s shorter than the target band allows: it has more absorption there than the target wants.`,
       "250 Hz to 2 kHz are within the target band.",
       "No result at 63 Hz: not every finish has a coefficient there.",
@@ -176,7 +176,7 @@ describe("status, shortfall and sentences against DIN 18041 group A2", () => {
     expect(treated.sentences).toContain("500 Hz to 2 kHz are within the limit.");
     expect(treated.sentences).toContain("The target says nothing at 125 Hz, 250 Hz and 4 kHz.");
     const loud = ok(checkRoom(input({ surfaces: referenceRoom(() => flat(0.05)), target: ansi, treatments: [{ surface: "floor", area: 5, alpha: flat(0.2) }] })));
-    expect(loud.sentences[0]).toMatch(/^At 500 Hz the treated room rings \d+\.\d\d s longer than the limit allows; it lacks \d+\.\d m² sabins of absorption\.$/);
+    expect(loud.sentences[0]).toMatch(/^At 500 Hz the treated room rings \d+\.\d\d s longer than the limit allows; it lacks \d+\.\d m² of absorption \(metric sabins\)\.$/);
   });
 });
 
