@@ -11,7 +11,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TitleBlock } from "@/components/ui/sheet";
 import { NEW_BUILD_UP_SPEC } from "@/components/bench/facing-defaults";
-import { describeFacing } from "./describe";
+import { describeFacing } from "@/lib/build-ups/describe";
 
 export function BuildUpLibrary({ projectId, initial, mayEdit, units }: { projectId: string; initial: BuildUpView[]; mayEdit: boolean; units: UnitPreference }) {
   const router = useRouter();

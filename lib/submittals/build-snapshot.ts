@@ -34,6 +34,8 @@ export const HIGH_LEVEL_TOP = 2.4;
 export interface MaterialInfo {
   name: string;
   alpha: OctaveRecord;
+  /** where the values come from, as the library or the project material says */
+  source?: string;
 }
 
 export interface SnapshotSource {
@@ -146,6 +148,11 @@ export function buildSnapshot(source: SnapshotSource): SubmittalSnapshot {
     finish: materialRef(s.finish),
     openings: s.openings.map((o) => ({ kind: o.kind, name: o.name ?? "", x: o.x, y: o.y, width: o.width, height: o.height, material: materialRef(o.material) })),
   }));
+  const materialKeys = [...new Set(surfaces.flatMap((s) => [s.finish, ...s.openings.map((o) => o.material)]))].sort();
+  const materials = materialKeys.flatMap((key) => {
+    const m = source.materials(key);
+    return m ? [{ key, name: m.name, alpha: { ...m.alpha }, source: m.source ?? "" }] : [];
+  });
   const areaTreatments = fields.treatments.map((t) => ({ surfaceKey: t.surfaceKey, buildUpId: t.buildUpId, area: t.area }));
   const required = source.fire.room?.trim() ? source.fire.room.trim() : source.fire.project?.trim() ? source.fire.project.trim() : null;
   const kindOf = new Map(snapshotSurfaces.map((s) => [s.key, s.kind]));
@@ -175,6 +182,7 @@ export function buildSnapshot(source: SnapshotSource): SubmittalSnapshot {
     },
     target: target ? snapshotTarget(target) : null,
     surfaces: snapshotSurfaces,
+    materials,
     buildUps,
     panelTypes: types,
     placements,

@@ -180,6 +180,8 @@ export interface SubmittalSnapshot {
   };
   target: SnapshotTarget | null;
   surfaces: SnapshotSurface[];
+  /** the finishes and opening materials the surfaces name, by key, with the values the check used */
+  materials: { key: string; name: string; alpha: Record<string, number>; source: string }[];
   /** only the build-ups this room uses, by code */
   buildUps: SnapshotBuildUp[];
   panelTypes: SnapshotPanelType[];

@@ -102,7 +102,7 @@ export function smallRoomSource(): SnapshotSource {
     pins,
     materials: (key) => {
       const m = findMaterial(key);
-      return m ? { name: m.name, alpha: m.alpha } : undefined;
+      return m ? { name: m.name, alpha: m.alpha, source: m.source } : undefined;
     },
     fire: { project: "B-s1,d0", room: null },
     consultant: { name: "Casey Consultant (fictional)", firm: "Test Acoustics (fictional)", email: "consultant@example.test" },
