@@ -12,11 +12,21 @@ export type { UnitPreference };
 
 const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 
+/** One formatted text per value: a drawing repeats a few lengths hundreds of times, and locale formatting is slow. */
+function remembered(format: (x: number) => string): (x: number) => string {
+  const seen = new Map<number, string>();
+  return (x) => {
+    let text = seen.get(x);
+    if (text === undefined) seen.set(x, (text = format(x)));
+    return text;
+  };
+}
+
 export function formatters(units: UnitPreference = "metric") {
-  const len = (m: number) => formatLength(m, units);
+  const len = remembered((m) => formatLength(m, units));
   /** a small length (a hole, a border, a set-out) always in mm or inches */
-  const fine = (m: number) => formatLength(m, units, { small: true });
-  const area = (m2: number) => formatArea(m2, units);
+  const fine = remembered((m) => formatLength(m, units, { small: true }));
+  const area = remembered((m2) => formatArea(m2, units));
   return {
     units,
     len,

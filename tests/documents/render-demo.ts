@@ -1,6 +1,6 @@
 /**
  * Renders the demo rehearsal room's documents into a folder for looking at, page by page:
- *   npx tsx --conditions=import tests/documents/render-demo.ts [out-dir]
+ *   npx tsx --conditions=import tests/documents/render-demo.ts [out-dir, default .data/documents]
  * then, for example, `pdftoppm -r 70 -png out-dir/submittal.pdf out-dir/submittal`.
  */
 import fs from "node:fs";
@@ -18,7 +18,7 @@ export const DEMO_APPROVAL: SubmittalDecision = {
 };
 
 async function main() {
-  const out = process.argv[2] ?? "tests/documents/out";
+  const out = process.argv[2] ?? ".data/documents";
   fs.mkdirSync(out, { recursive: true });
   const snapshot = buildSnapshot(await demoRehearsalSource());
   const submittal = await renderSubmittalPdf(snapshot);

@@ -15,7 +15,17 @@ export async function pdfPages(bytes: Uint8Array): Promise<string[]> {
   for (let n = 1; n <= doc.numPages; n++) {
     const page = await doc.getPage(n);
     const content = await page.getTextContent();
-    const text = content.items.map((item) => ("str" in item ? item.str : "")).join(" ");
+    // Runs that touch on one line are one word (the renderer splits a hash where digits meet
+    // letters); anything further apart is separated by a space.
+    let text = "";
+    let end: { x: number; y: number } | null = null;
+    for (const item of content.items) {
+      if (!("str" in item)) continue;
+      const [x, y] = [item.transform[4], item.transform[5]];
+      const touching = end !== null && Math.abs(y - end.y) < 0.5 && Math.abs(x - end.x) < 0.5;
+      text += (touching ? "" : " ") + item.str;
+      end = { x: x + item.width, y };
+    }
     pages.push(text.replace(/\s+/g, " ").trim());
   }
   await doc.destroy();

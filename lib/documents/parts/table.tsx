@@ -17,7 +17,8 @@ export interface Column<T> {
  * onto, thin rules between rows, numbers right-aligned in tabular figures. `tone` paints a row's
  * background (amber or red only for flags).
  */
-export function Table<T>({ columns, rows, tone, fontSize = 7.5 }: { columns: Column<T>[]; rows: readonly T[]; tone?: (row: T) => string | undefined; fontSize?: number }) {
+export function Table<T>(props: { columns: Column<T>[]; rows: readonly T[]; tone?: (row: T) => string | undefined; fontSize?: number; rowHeight?: number }) {
+  const { columns, rows, tone, fontSize = 7.5, rowHeight } = props;
   const cellStyle = (c: Column<T>) => ({ flex: c.width, paddingHorizontal: 3, paddingVertical: 2.5, textAlign: c.numeric ? ("right" as const) : ("left" as const) });
   return (
     <View style={{ fontSize, marginBottom: 8 }}>
@@ -29,7 +30,7 @@ export function Table<T>({ columns, rows, tone, fontSize = 7.5 }: { columns: Col
         ))}
       </View>
       {rows.map((row, i) => (
-        <View key={i} wrap={false} style={{ flexDirection: "row", borderBottomWidth: 0.4, borderBottomColor: COLOURS.rule, backgroundColor: tone?.(row) }}>
+        <View key={i} wrap={false} style={{ flexDirection: "row", borderBottomWidth: 0.4, borderBottomColor: COLOURS.rule, backgroundColor: tone?.(row), ...(rowHeight ? { height: rowHeight } : {}) }}>
           {columns.map((c) => (
             <Text key={c.header} style={{ ...cellStyle(c), ...(c.numeric ? { fontFamily: FIGURES } : {}) }}>
               {c.cell(row)}
@@ -39,6 +40,13 @@ export function Table<T>({ columns, rows, tone, fontSize = 7.5 }: { columns: Col
       ))}
     </View>
   );
+}
+
+/** Rows split into runs of `size`, for tables paginated by hand (react-pdf's own page splitting grows fast with the rows). */
+export function chunks<T>(rows: readonly T[], size: number): T[][] {
+  const out: T[][] = [];
+  for (let i = 0; i < rows.length; i += size) out.push(rows.slice(i, i + size));
+  return out.length ? out : [[]];
 }
 
 /** Label and value pairs in two columns, for covers and title blocks. */

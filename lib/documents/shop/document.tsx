@@ -6,7 +6,8 @@ import { placedTypes } from "../quantities";
 import { documentDate, renderPdf } from "../render";
 import { laidOutSurfaces } from "../submittal/context";
 import type { ShopContext, ShopPackInput } from "./context";
-import { PanelTypeSheet, PlacementScheduleSheet, QuantitiesSheet, SurfaceSheet } from "./sheets";
+import { PlacementScheduleSheets } from "./placement-schedule";
+import { PanelTypeSheet, QuantitiesSheet, SurfaceSheet } from "./sheets";
 
 export function shopContext(input: ShopPackInput): ShopContext {
   requireApproval(input.approval);
@@ -33,7 +34,7 @@ export function ShopDrawingDocument({ c }: { c: ShopContext }) {
       {laidOutSurfaces(s).map((surface) => (
         <SurfaceSheet key={surface.key} c={c} surface={surface} />
       ))}
-      <PlacementScheduleSheet c={c} />
+      <PlacementScheduleSheets c={c} />
     </Document>
   );
 }

@@ -42,15 +42,15 @@ function TitleBlock({ c, title }: { c: ShopContext; title: string }) {
         {approval.outcome === "approved-as-noted" ? <Text style={{ color: COLOURS.inkSoft }}>Build to the notes on the decision record.</Text> : null}
       </Field>
       <Field label="Submittal PDF SHA-256">
-        {half(c.pdfHash).map((line) => (
-          <Text key={line} style={{ fontFamily: FIGURES, fontSize: 6.6 }}>
+        {half(c.pdfHash).map((line, i) => (
+          <Text key={i} style={{ fontFamily: FIGURES, fontSize: 6.6 }}>
             {line}
           </Text>
         ))}
       </Field>
       <Field label="Snapshot SHA-256">
-        {half(c.hash).map((line) => (
-          <Text key={line} style={{ fontFamily: FIGURES, fontSize: 6.6 }}>
+        {half(c.hash).map((line, i) => (
+          <Text key={i} style={{ fontFamily: FIGURES, fontSize: 6.6 }}>
             {line}
           </Text>
         ))}

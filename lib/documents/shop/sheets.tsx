@@ -3,7 +3,7 @@ import type { SnapshotPanelType, SnapshotSurface } from "@/lib/submittals";
 import { describeCavity, describeFacing, describeInfill } from "@/lib/build-ups/describe";
 import { ElevationFigure } from "../parts/elevation-figure";
 import { Facts, Notice, Table } from "../parts/table";
-import { type CutListRow, cutList, openingsOf, type PlacementRow, placedTypes, placementRows } from "../quantities";
+import { type CutListRow, cutList, openingsOf, placedTypes } from "../quantities";
 import { OVERHEAD_CAUTION } from "../submittal/elevations";
 import { COLOURS, styles } from "../theme";
 import { DRAWING_AREA, type ShopContext } from "./context";
@@ -139,31 +139,6 @@ export function SurfaceSheet({ c, surface }: { c: ShopContext; surface: Snapshot
       <Text style={{ fontSize: 7.5, color: COLOURS.inkSoft }}>
         Running dimensions from the datum (the lower-left corner of the surface, seen from inside the room) to each panel&apos;s left and bottom edge. The placement schedule lists every panel&apos;s set-out and size.
       </Text>
-    </DrawingSheet>
-  );
-}
-
-export function PlacementScheduleSheet({ c }: { c: ShopContext }) {
-  const { f } = c;
-  return (
-    <DrawingSheet c={c} title="Placement schedule">
-      <Text style={styles.kicker}>Set-out</Text>
-      <Text style={styles.h2}>Placement schedule</Text>
-      <Text style={{ ...styles.small, marginBottom: 6 }}>Set-out is the panel&apos;s lower-left corner, measured from the lower-left corner of its surface, seen from inside the room.</Text>
-      <Table
-        fontSize={7}
-        columns={[
-          { header: "Code", width: 0.8, cell: (r: PlacementRow) => r.code },
-          { header: "Surface", width: 1.6, cell: (r) => r.surface },
-          { header: "Type", width: 0.6, cell: (r) => r.type },
-          { header: "Set-out x", width: 1, numeric: true, cell: (r) => f.fine(r.x) },
-          { header: "Set-out y", width: 1, numeric: true, cell: (r) => f.fine(r.y) },
-          { header: "Width", width: 1, numeric: true, cell: (r) => f.fine(r.width) },
-          { header: "Height", width: 1, numeric: true, cell: (r) => f.fine(r.height) },
-          { header: "Installed", width: 0.8, cell: () => "" },
-        ]}
-        rows={placementRows(c.s)}
-      />
     </DrawingSheet>
   );
 }
