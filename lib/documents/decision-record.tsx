@@ -1,9 +1,9 @@
 import { Document, Text, View } from "@react-pdf/renderer";
 import { freezeSnapshot, type SubmittalSnapshot } from "@/lib/submittals";
 import { type DecisionOutcome, OUTCOME_WORDS, type SubmittalDecision } from "./decision";
-import { FIGURES } from "./fonts";
 import { formatInstant } from "./format";
 import { Paragraph, ReportPage } from "./parts/frame";
+import { HashBlock } from "./parts/hash";
 import { Facts } from "./parts/table";
 import { documentDate, renderPdf } from "./render";
 import { footerText } from "./submittal/context";
@@ -21,15 +21,6 @@ const MEANING: Record<DecisionOutcome, string> = {
   "approved-as-noted": "The client approves this revision subject to the notes below. The installer may build from its shop pack, taking the notes into account.",
   returned: "The client returns this revision for revision with the notes below. Nothing may be built from it; the consultant issues a next revision.",
 };
-
-function Hash({ label, value }: { label: string; value: string }) {
-  return (
-    <View style={{ marginBottom: 6 }}>
-      <Text style={styles.label}>{label}</Text>
-      <Text style={{ fontFamily: FIGURES, fontSize: 9, fontWeight: 500, letterSpacing: 0.3 }}>{value}</Text>
-    </View>
-  );
-}
 
 /** One page recording the client's decision on one revision, citing what was decided on by hash. */
 export function DecisionRecordDocument({ snapshot: s, hash, submittalPdfHash, decision }: DecisionRecordInput & { hash: string }) {
@@ -62,8 +53,8 @@ export function DecisionRecordDocument({ snapshot: s, hash, submittalPdfHash, de
           <Text>{decision.notes.trim() || "None."}</Text>
         </View>
         <Text style={styles.h3}>What was decided on</Text>
-        <Hash label="Submittal PDF SHA-256" value={submittalPdfHash} />
-        <Hash label="Snapshot SHA-256" value={hash} />
+        <HashBlock label="Submittal PDF SHA-256" hash={submittalPdfHash} />
+        <HashBlock label="Snapshot SHA-256" hash={hash} />
         <Paragraph soft>
           The submittal PDF is identified by its SHA-256, recorded when it was issued; the snapshot hash is printed on its cover. A copy of the PDF whose SHA-256 differs is not the document decided on.
         </Paragraph>

@@ -10,7 +10,7 @@ export type FigureCurve = { points: { f: number; value: number }[]; tone: "coppe
  * labelled at octave centres, α from 0 to 1 (higher if a value exceeds 1), markers in copper.
  */
 export function AbsorptionFigure({ curves, markers, width = 250, height = 150 }: { curves: FigureCurve[]; markers: { f: number; label: string }[]; width?: number; height?: number }) {
-  const pad = { left: 26, right: 8, top: 10, bottom: 22 };
+  const pad = { left: 26, right: 8, top: 16, bottom: 22 };
   const g = absorptionGeometry(curves, { width, height, pad });
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
@@ -34,13 +34,14 @@ export function AbsorptionFigure({ curves, markers, width = 250, height = 150 }:
       <SvgText x={width - pad.right} y={height - 3} anchor="end">
         Hz
       </SvgText>
-      <SvgText x={pad.left - 4} y={pad.top - 2} anchor="end">
+      <SvgText x={pad.left - 4} y={pad.top - 8} anchor="end">
         α
       </SvgText>
       {markers.map((m, i) => (
         <G key={`${m.label}-${i}`}>
-          <Line x1={g.x(m.f)} x2={g.x(m.f)} y1={pad.top} y2={height - pad.bottom} stroke={COLOURS.copper} strokeWidth={0.6} strokeDasharray="1.5 2" />
-          <SvgText x={g.x(m.f) + 3} y={pad.top + 8 + i * 8} size={6} fill={COLOURS.copperDeep}>
+          <Line x1={g.x(m.f)} x2={g.x(m.f)} y1={pad.top} y2={height - pad.bottom} stroke={COLOURS.copper} strokeWidth={0.6} strokeDasharray={i ? "1.5 1" : "1.5 2"} />
+          <Line x1={width - pad.right - 78} x2={width - pad.right - 70} y1={pad.top + 6 + i * 8} y2={pad.top + 6 + i * 8} stroke={COLOURS.copper} strokeWidth={0.6} strokeDasharray={i ? "1.5 1" : "1.5 2"} />
+          <SvgText x={width - pad.right - 67} y={pad.top + 8 + i * 8} size={6} fill={COLOURS.copperDeep}>
             {m.label}
           </SvgText>
         </G>

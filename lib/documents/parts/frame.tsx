@@ -18,7 +18,7 @@ export function ReportPage({ footer, landscape = false, children }: { footer: st
 /** A section's heading: a small copper kicker over the title. */
 export function SectionTitle({ kicker, title, minPresenceAhead = 120 }: { kicker: string; title: string; minPresenceAhead?: number }) {
   return (
-    <View minPresenceAhead={minPresenceAhead} wrap={false}>
+    <View minPresenceAhead={minPresenceAhead} wrap={false} style={{ marginTop: 6 }}>
       <Text style={styles.kicker}>{kicker}</Text>
       <Text style={styles.h2}>{title}</Text>
     </View>

@@ -8,7 +8,7 @@ import { SvgText } from "./svg-text";
  * geometry as the Check screen's chart: the band shaded, before treatment dashed, after in copper.
  */
 export function ReverbFigure({ points, treated, width = 515, height = 210 }: { points: ReverbPoint[]; treated: boolean; width?: number; height?: number }) {
-  const pad = { left: 34, right: 12, top: 12, bottom: 24 };
+  const pad = { left: 34, right: 12, top: 18, bottom: 24 };
   const g = reverbGeometry(points, { width, height, pad });
   return (
     <Svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
@@ -21,7 +21,7 @@ export function ReverbFigure({ points, treated, width = 515, height = 210 }: { p
           </SvgText>
         </G>
       ))}
-      <SvgText x={pad.left - 5} y={pad.top - 3} anchor="end" size={7}>
+      <SvgText x={pad.left - 5} y={pad.top - 9} anchor="end" size={7}>
         s
       </SvgText>
       {g.band && <Polygon points={g.band} fill={COLOURS.copperSoft} fillOpacity={0.6} stroke={COLOURS.copper} strokeOpacity={0.35} strokeWidth={0.5} />}

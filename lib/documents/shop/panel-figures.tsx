@@ -158,7 +158,7 @@ export function SectionFigure({ b, f, width, height, sheet }: { b: SnapshotBuild
       <Dimension axis="x" from={cavityX} to={plateX} y={y0 - 14} label={`cavity ${f.fine(cavity)}`} size={6} />
       {infill && <Dimension axis="x" from={infillX} to={infillX + infill.thickness * s} y={y0 + bandHeight + 10} label={f.fine(infill.thickness)} size={6} />}
       <Dimension axis="x" from={plateX} to={plateX + Math.max(plate * s, 1)} y={y0 + bandHeight + 22} label={`plate ${f.fine(plate)}`} size={6} />
-      <SvgText x={width - pad.right} y={height - 2} anchor="end">
+      <SvgText x={pad.left} y={height - 2}>
         {`Section, scale 1:${scale.denominator} on ${sheet}${b.spec.cavity.partitioned ? "; cavity partitioned" : "; cavity open"}`}
       </SvgText>
     </Svg>

@@ -1,12 +1,10 @@
 import type { ReactNode } from "react";
 import { Page, Text, View } from "@react-pdf/renderer";
 import { OUTCOME_WORDS } from "../decision";
-import { FIGURES } from "../fonts";
 import { formatInstant } from "../format";
+import { HashLines } from "../parts/hash";
 import { COLOURS, styles } from "../theme";
 import { type ShopContext, SHEET } from "./context";
-
-const half = (hash: string) => [hash.slice(0, 32), hash.slice(32)];
 
 function Field({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -42,18 +40,10 @@ function TitleBlock({ c, title }: { c: ShopContext; title: string }) {
         {approval.outcome === "approved-as-noted" ? <Text style={{ color: COLOURS.inkSoft }}>Build to the notes on the decision record.</Text> : null}
       </Field>
       <Field label="Submittal PDF SHA-256">
-        {half(c.pdfHash).map((line, i) => (
-          <Text key={i} style={{ fontFamily: FIGURES, fontSize: 6.6 }}>
-            {line}
-          </Text>
-        ))}
+        <HashLines hash={c.pdfHash} size={6.6} split />
       </Field>
       <Field label="Snapshot SHA-256">
-        {half(c.hash).map((line, i) => (
-          <Text key={i} style={{ fontFamily: FIGURES, fontSize: 6.6 }}>
-            {line}
-          </Text>
-        ))}
+        <HashLines hash={c.hash} size={6.6} split />
       </Field>
       <Field label="Units and datum">
         <Text>{`Dimensions in ${f.units === "imperial" ? "inches" : "millimetres"}. Set-out from each surface's lower-left corner, seen from inside the room.`}</Text>

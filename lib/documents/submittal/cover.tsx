@@ -1,7 +1,7 @@
 import { Text, View } from "@react-pdf/renderer";
 import { ROOM_USE_WORDS, type RoomUse } from "@/lib/room-uses";
 import { formatInstant } from "../format";
-import { FIGURES } from "../fonts";
+import { HashBlock } from "../parts/hash";
 import { Facts, Notice } from "../parts/table";
 import { COLOURS, styles } from "../theme";
 import type { DocContext } from "./context";
@@ -56,8 +56,7 @@ export function Cover(c: DocContext) {
         ]}
       />
       <View style={{ borderWidth: 0.75, borderColor: COLOURS.rule, backgroundColor: "#fffdf8", padding: 8, marginVertical: 10 }}>
-        <Text style={styles.label}>Snapshot SHA-256</Text>
-        <Text style={{ fontFamily: FIGURES, fontSize: 9, fontWeight: 500, letterSpacing: 0.3, marginTop: 3, marginBottom: 3 }}>{hash}</Text>
+        <HashBlock label="Snapshot SHA-256" hash={hash} />
         <Text style={styles.small}>The SHA-256 of this revision&apos;s snapshot in canonical JSON: every value in this document comes from it. The client&apos;s decision record and the shop pack cite it.</Text>
       </View>
       <Text style={styles.h3}>In short</Text>

@@ -1,7 +1,7 @@
 import { Text, View } from "@react-pdf/renderer";
 import { FIRE_STATUS_WORDS, formatInstant } from "../format";
-import { FIGURES } from "../fonts";
 import { Paragraph, SectionTitle } from "../parts/frame";
+import { HashBlock } from "../parts/hash";
 import { Notice, Table } from "../parts/table";
 import { COLOURS, styles } from "../theme";
 import { buildUpOf, type DocContext, surfaceName } from "./context";
@@ -64,8 +64,7 @@ export function DecisionBlock(c: DocContext) {
         <Text style={{ marginBottom: 4 }}>
           The client records the decision in Cavitas with their full name typed as signature. Cavitas keeps the decision, the signer, the time and this document&apos;s SHA-256, and issues a one-page decision record that cites the snapshot below. The consultant does not decide their own submittal.
         </Text>
-        <Text style={styles.label}>Snapshot SHA-256</Text>
-        <Text style={{ fontFamily: FIGURES, fontSize: 8 }}>{hash}</Text>
+        <HashBlock label="Snapshot SHA-256" hash={hash} size={8} />
       </View>
     </View>
   );

@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from "vitest";
+import { octaveName } from "@/lib/rooms/octaves";
 import { renderSubmittalPdf } from "@/lib/documents";
 import { buildSnapshot, freezeSnapshot, type SubmittalSnapshot } from "@/lib/submittals";
 import { BASS_SPEC, placementRow, smallRoomSource } from "../../support/submittal-rows";
@@ -46,7 +47,7 @@ describe("revision B's submittal lists what changed since A", () => {
       const before = a.check.octaves[i].after!.sabine;
       const after = b.check.octaves[i].after!.sabine;
       const f = a.check.octaves[i].f;
-      const name = f >= 1000 ? `${f / 1000} kHz` : `${f} Hz`;
+      const name = octaveName(f);
       const delta = after - before;
       expect(text).toContain(`${name} ${before.toFixed(2)} s ${after.toFixed(2)} s ${delta >= 0 ? "+" : "−"}${Math.abs(delta).toFixed(2)} s`);
     }

@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from "vitest";
+import { octaveName } from "@/lib/rooms/octaves";
 import { renderSubmittalPdf } from "@/lib/documents";
 import { treatedArea } from "@/lib/board/treated-area";
 import { fieldsFromRows, panelAlphaOf, runCheck, surfacesFor } from "@/lib/room-model";
@@ -51,7 +52,7 @@ describe("the submittal PDF of the demo rehearsal room", () => {
   it("prints the check's octave values as the engine computes them from the same rows", () => {
     const check = checkFromRows();
     for (const o of check.octaves) {
-      const name = o.f >= 1000 ? `${o.f / 1000} kHz` : `${o.f} Hz`;
+      const name = octaveName(o.f);
       const band = o.target.low !== null && o.target.high !== null ? `${o.target.low.toFixed(2)} to ${o.target.high.toFixed(2)} s` : "–";
       const s = (v: number | undefined) => (v === undefined ? "–" : `${v.toFixed(2)} s`);
       expect(text).toContain(`${name} ${band} ${s(o.before?.sabine)} ${s(o.after?.sabine)} ${s(o.after?.eyring)}`);
