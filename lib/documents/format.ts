@@ -24,8 +24,12 @@ function remembered(format: (x: number) => string): (x: number) => string {
 
 export function formatters(units: UnitPreference = "metric") {
   const len = remembered((m) => formatLength(m, units));
-  /** a small length (a hole, a border, a set-out) always in mm or inches */
-  const fine = remembered((m) => formatLength(m, units, { small: true }));
+  /**
+   * A length read off a drawing (a hole, a border, a set-out): always in mm, or in feet and
+   * inches. (lib/units' `small` option is not used in imperial: it drops the whole feet of a
+   * length over a foot, 6 m coming out as "8 1/4 in".)
+   */
+  const fine = remembered((m) => (units === "metric" ? formatLength(m, units, { small: true }) : formatLength(m, units)));
   const area = remembered((m2) => formatArea(m2, units));
   return {
     units,

@@ -57,3 +57,17 @@ describe("revision B's submittal lists what changed since A", () => {
     expect(text).toContain("required fire class B-s1,d0 A2-s1,d0");
   });
 });
+
+describe("a submittal in imperial units", () => {
+  it("writes lengths in feet and inches through lib/units.ts", async () => {
+    const text = (await pdfPages(await renderSubmittalPdf(a, { units: "imperial" }))).join("\n");
+    // Wall A is 6 × 3 m: 6 / 0.0254 = 236.22 in, to the nearest eighth 236 1/4 in = 19 ft 8 1/4 in;
+    // 3 m = 118.11 in, 118 1/8 in = 9 ft 10 1/8 in (the international inch, 25.4 mm exactly).
+    expect(text).toContain("Wall A (length) 19 ft 8 1/4 in × 9 ft 10 1/8 in");
+    // The open pin at 3 m, 2.5 m: 2.5 m = 98.43 in, 98 3/8 in = 8 ft 2 3/8 in.
+    expect(text).toContain("Pin 1 on Wall A (length) at 9 ft 10 1/8 in, 8 ft 2 3/8 in from the datum");
+    // A hole is under a foot: inches alone (8 mm = 0.315 in, 3/8 in to the nearest eighth).
+    expect(text).toContain("Ø3/8 in holes at 1 5/8 in, square");
+    expect(text).not.toMatch(/\d mm\b/);
+  }, 120_000);
+});
