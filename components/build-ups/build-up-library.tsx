@@ -11,7 +11,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TitleBlock } from "@/components/ui/sheet";
 import { NEW_BUILD_UP_SPEC } from "@/components/bench/facing-defaults";
-import { describeFacing } from "./describe";
+import { describeFacing } from "@/lib/build-ups/describe";
 
 export function BuildUpLibrary({ projectId, initial, mayEdit, units }: { projectId: string; initial: BuildUpView[]; mayEdit: boolean; units: UnitPreference }) {
   const router = useRouter();
@@ -60,7 +60,7 @@ export function BuildUpLibrary({ projectId, initial, mayEdit, units }: { project
                 </td>
                 <td className="py-2.5 pr-3 text-ink-soft">{describeFacing(b.spec, units)}</td>
                 <td className="figures py-2.5 pr-3 text-right">
-                  {formatLength(b.spec.cavity.depth, units, { small: true })}
+                  {formatLength(b.spec.cavity.depth, units, { scale: "panel" })}
                   {b.spec.infill ? " + infill" : ""}
                 </td>
                 <td className="figures py-2.5 pr-3 text-right">{(b.result.openArea * 100).toFixed(1)} %</td>

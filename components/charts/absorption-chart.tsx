@@ -1,4 +1,4 @@
-import { hzLabel, logScale, OCTAVE_TICKS } from "./log-axis";
+import { absorptionGeometry } from "@/lib/charts/absorption-geometry";
 
 export type CurveTone = "copper" | "ink" | "faint" | "sage";
 /** solid, dashed or dotted: curves told apart by their line as well as their colour */
@@ -11,31 +11,28 @@ const STROKE: Record<CurveTone, string> = { copper: "#b0602f", ink: "#1a2740", f
 const DASH: Record<CurveLine, string | undefined> = { solid: undefined, dashed: "7 4", dotted: "1.5 3.5" };
 
 // Absorption against frequency: log axis 50 Hz – 5 kHz labelled at octave centres, α from 0 to
-// 1 (or higher, if a value exceeds 1, as ASTM values may). Drawn in Cavitas's own sheet style.
+// 1 (or higher, if a value exceeds 1, as ASTM values may). Drawn in Cavitas's own sheet style;
+// the geometry is shared with the documents (lib/charts/absorption-geometry.ts).
 export function AbsorptionChart({ curves, markers = [], height = 300 }: { curves: Curve[]; markers?: Marker[]; height?: number }) {
   const width = 720;
   const pad = { left: 44, right: 16, top: 18, bottom: 34 };
-  const maxValue = Math.max(1, ...curves.flatMap((c) => c.points.map((p) => p.value)));
-  const yMax = Math.ceil(maxValue * 10) / 10;
-  const x = logScale(45, 5600, pad.left, width - pad.right);
-  const y = (v: number) => pad.top + (1 - v / yMax) * (height - pad.top - pad.bottom);
-  const gridValues = Array.from({ length: Math.round(yMax * 5) + 1 }, (_, i) => i * 0.2).filter((v) => v <= yMax + 1e-9);
+  const { x, grid, octaves, line } = absorptionGeometry(curves, { width, height, pad });
   return (
     <svg viewBox={`0 0 ${width} ${height}`} className="w-full" role="img" aria-label="Absorption coefficient by frequency" data-testid="absorption-chart">
       <rect x={pad.left} y={pad.top} width={width - pad.left - pad.right} height={height - pad.top - pad.bottom} fill="#fffdf8" stroke="#1a2740" strokeOpacity="0.35" />
-      {gridValues.map((v) => (
-        <g key={v}>
-          <line x1={pad.left} x2={width - pad.right} y1={y(v)} y2={y(v)} stroke="#1a2740" strokeOpacity={v === 1 ? 0.3 : 0.08} strokeDasharray={v === 1 ? "4 3" : undefined} />
-          <text x={pad.left - 8} y={y(v) + 4} textAnchor="end" fontSize="11" fill="#44506a" className="figures">
-            {v.toFixed(1)}
+      {grid.map((g) => (
+        <g key={g.value}>
+          <line x1={pad.left} x2={width - pad.right} y1={g.y} y2={g.y} stroke="#1a2740" strokeOpacity={g.unity ? 0.3 : 0.08} strokeDasharray={g.unity ? "4 3" : undefined} />
+          <text x={pad.left - 8} y={g.y + 4} textAnchor="end" fontSize="11" fill="#44506a" className="figures">
+            {g.value.toFixed(1)}
           </text>
         </g>
       ))}
-      {OCTAVE_TICKS.map((f) => (
-        <g key={f}>
-          <line x1={x(f)} x2={x(f)} y1={pad.top} y2={height - pad.bottom} stroke="#1a2740" strokeOpacity="0.1" />
-          <text x={x(f)} y={height - pad.bottom + 16} textAnchor="middle" fontSize="11" fill="#44506a" className="figures">
-            {hzLabel(f)}
+      {octaves.map((o) => (
+        <g key={o.f}>
+          <line x1={o.x} x2={o.x} y1={pad.top} y2={height - pad.bottom} stroke="#1a2740" strokeOpacity="0.1" />
+          <text x={o.x} y={height - pad.bottom + 16} textAnchor="middle" fontSize="11" fill="#44506a" className="figures">
+            {o.text}
           </text>
         </g>
       ))}
@@ -63,7 +60,7 @@ export function AbsorptionChart({ curves, markers = [], height = 300 }: { curves
           strokeDasharray={DASH[lineOf(c)]}
           strokeLinecap={lineOf(c) === "dotted" ? "round" : undefined}
           strokeLinejoin="round"
-          points={c.points.map((p) => `${x(p.f).toFixed(1)},${y(Math.max(0, p.value)).toFixed(1)}`).join(" ")}
+          points={line(c.points)}
         />
       ))}
     </svg>

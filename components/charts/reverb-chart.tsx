@@ -1,37 +1,23 @@
-import { hzLabel } from "./log-axis";
+import { reverbGeometry, type ReverbPoint } from "@/lib/charts/reverb-geometry";
 
-export type ReverbPoint = { f: number; before: number | null; after: number | null; low: number | null; high: number | null };
+export type { ReverbPoint };
+
+const BOX = { width: 720, pad: { left: 48, right: 20, top: 18, bottom: 34 } };
 
 // Reverberation time per octave: the target band shaded, the room before treatment in a
-// faint dashed line, after treatment in copper. Octaves are evenly spaced (they are on a log
-// axis); seconds from 0.
+// faint dashed line, after treatment in copper. The geometry is shared with the submittal PDF
+// (lib/charts/reverb-geometry.ts).
 export function ReverbChart({ points, treated, height = 280 }: { points: ReverbPoint[]; treated: boolean; height?: number }) {
-  const width = 720;
-  const pad = { left: 48, right: 20, top: 18, bottom: 34 };
-  const values = points.flatMap((p) => [p.before, p.after, p.high].filter((v): v is number => v !== null));
-  const yMax = Math.max(1, Math.ceil(Math.max(...values, 0) * 2) / 2);
-  const step = (width - pad.left - pad.right) / Math.max(1, points.length - 1);
-  const x = (i: number) => pad.left + i * step;
-  const y = (v: number) => pad.top + (1 - v / yMax) * (height - pad.top - pad.bottom);
-  const ticks = Array.from({ length: Math.round(yMax / 0.5) + 1 }, (_, i) => i * 0.5);
-  const line = (key: "before" | "after") =>
-    points
-      .map((p, i) => (p[key] === null ? null : `${x(i).toFixed(1)},${y(p[key] as number).toFixed(1)}`))
-      .filter(Boolean)
-      .join(" ");
-  const banded = points.map((p, i) => ({ ...p, i })).filter((p) => p.low !== null || p.high !== null);
-  const band =
-    banded.length > 1
-      ? [...banded.map((p) => `${x(p.i)},${y(p.high ?? yMax)}`), ...[...banded].reverse().map((p) => `${x(p.i)},${y(p.low ?? 0)}`)].join(" ")
-      : null;
+  const { width, pad } = BOX;
+  const { x, y, ticks, before, after, band, labels } = reverbGeometry(points, { ...BOX, height });
   return (
     <svg viewBox={`0 0 ${width} ${height}`} className="w-full" role="img" aria-label="Reverberation time by octave against the target" data-testid="reverb-chart">
       <rect x={pad.left} y={pad.top} width={width - pad.left - pad.right} height={height - pad.top - pad.bottom} fill="#fffdf8" stroke="#1a2740" strokeOpacity="0.35" />
       {ticks.map((t) => (
-        <g key={t}>
-          <line x1={pad.left} x2={width - pad.right} y1={y(t)} y2={y(t)} stroke="#1a2740" strokeOpacity="0.08" />
-          <text x={pad.left - 8} y={y(t) + 4} textAnchor="end" fontSize="11" fill="#44506a" className="figures">
-            {t.toFixed(1)}
+        <g key={t.value}>
+          <line x1={pad.left} x2={width - pad.right} y1={t.y} y2={t.y} stroke="#1a2740" strokeOpacity="0.08" />
+          <text x={pad.left - 8} y={t.y + 4} textAnchor="end" fontSize="11" fill="#44506a" className="figures">
+            {t.value.toFixed(1)}
           </text>
         </g>
       ))}
@@ -39,16 +25,16 @@ export function ReverbChart({ points, treated, height = 280 }: { points: ReverbP
         s
       </text>
       {band && <polygon points={band} fill="#e9c8b0" fillOpacity="0.55" stroke="#b0602f" strokeOpacity="0.35" data-testid="target-band" />}
-      {points.map((p, i) => (
-        <text key={p.f} x={x(i)} y={height - pad.bottom + 16} textAnchor="middle" fontSize="11" fill="#44506a" className="figures">
-          {hzLabel(p.f)}
+      {labels.map((l) => (
+        <text key={l.f} x={l.x} y={height - pad.bottom + 16} textAnchor="middle" fontSize="11" fill="#44506a" className="figures">
+          {l.text}
         </text>
       ))}
       <text x={width - pad.right} y={height - 4} textAnchor="end" fontSize="10" fill="#7c8598">
         Hz
       </text>
-      <polyline points={line("before")} fill="none" stroke="#44506a" strokeWidth="1.6" strokeDasharray="5 4" data-curve="before" />
-      {treated && <polyline points={line("after")} fill="none" stroke="#b0602f" strokeWidth="2.6" data-curve="after" />}
+      <polyline points={before} fill="none" stroke="#44506a" strokeWidth="1.6" strokeDasharray="5 4" data-curve="before" />
+      {treated && <polyline points={after} fill="none" stroke="#b0602f" strokeWidth="2.6" data-curve="after" />}
       {points.map((p, i) =>
         (treated ? p.after : p.before) === null ? null : (
           <circle key={p.f} cx={x(i)} cy={y((treated ? p.after : p.before) as number)} r="3.5" fill={treated ? "#b0602f" : "#44506a"} />
