@@ -139,9 +139,9 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
   const roomSurfaces = useMemo(() => surfacesFor(roomFields), [roomFields]);
   const otherBoards = useMemo(() => room.placed.filter((l) => l.surfaceKey !== initial.surfaceKey), [room.placed, initial.surfaceKey]);
   const check = useMemo(() => {
-    const mine = treatedArea([{ surfaceKey: initial.surfaceKey, placements: shown }]);
+    const mine = treatedArea([{ surfaceKey: initial.surfaceKey, surface: boardSurface, placements: shown }]);
     return runCheck({ fields: roomFields, surfaces: roomSurfaces, treatments: [...room.treatments, ...otherBoards, ...mine], panels, lookup }).check;
-  }, [shown, roomFields, roomSurfaces, room.treatments, otherBoards, panels, lookup, initial.surfaceKey]);
+  }, [shown, boardSurface, roomFields, roomSurfaces, room.treatments, otherBoards, panels, lookup, initial.surfaceKey]);
   useLayoutEffect(() => {
     if (typeof window !== "undefined") {
       const stats = (window.__cavitasBoard ??= { lastDragAt: 0, checkAt: 0, frames: 0 });
