@@ -16,6 +16,8 @@ type Props = {
   onAdd: () => void;
   onArray: (spec: { columns: number; rows: number; gapX: number; gapY: number }) => void;
   gridModule: number;
+  /** the server's refusal of the grid module */
+  gridError?: string;
   setGridModule: (m: number) => void;
   units: UnitPreference;
   canUndo: boolean;
@@ -87,7 +89,7 @@ export function Toolbar(p: Props) {
         </div>
       )}
       <div className="flex flex-col gap-2 border-t border-ink/15 pt-3">
-        <MeasureField label="Grid module" metres={p.gridModule} units={p.units} onChange={p.setGridModule} />
+        <MeasureField label="Grid module" metres={p.gridModule} units={p.units} onChange={p.setGridModule} error={p.gridError} />
         <div className="grid grid-cols-3 gap-1">
           <ModeButton active={false} onClick={() => p.onZoom(1.25)}>
             Zoom +

@@ -138,13 +138,16 @@ export function treatedArea(boards: Iterable<BoardPlacements>): TreatedAreaLine[
     if (seen) seen.placements.push(...board.placements);
     else merged.set(board.surfaceKey, { surface: board.surface, placements: [...board.placements] });
   }
+  return [...merged].flatMap(([surfaceKey, { surface, placements }]) => linesOf(surfaceKey, countSurface(surface, placements)));
+}
+
+/** One surface's count as treatment lines for the check. */
+export function linesOf(surfaceKey: string, count: SurfaceCount): TreatedAreaLine[] {
   const lines: TreatedAreaLine[] = [];
-  for (const [surfaceKey, { surface, placements }] of merged) {
-    for (const [buildUpId, area] of countSurface(surface, placements).byBuildUp) {
-      // A build-up wholly over an opening or off the surface adds nothing (and the check
-      // refuses a line of no area).
-      if (area > 1e-9) lines.push({ surfaceKey, buildUpId, area });
-    }
+  for (const [buildUpId, area] of count.byBuildUp) {
+    // A build-up wholly over an opening or off the surface adds nothing (and the check
+    // refuses a line of no area).
+    if (area > 1e-9) lines.push({ surfaceKey, buildUpId, area });
   }
   return lines;
 }
