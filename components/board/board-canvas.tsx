@@ -83,7 +83,7 @@ export default function BoardCanvas(p: Props) {
   }, [v, p.width, p.height]);
 
   const dimensions = useMemo(() => surfaceDimensions(p.surface), [p.surface]);
-  const setOut = useMemo(() => (p.setOut ? panelSetOut(p.setOut) : []), [p.setOut]);
+  const setOut = useMemo(() => (p.setOut ? panelSetOut(p.setOut, p.surface) : []), [p.setOut, p.surface]);
   const drawnBox = marquee && {
     x: Math.min(marquee.x0, marquee.x1),
     y: Math.min(marquee.y0, marquee.y1),

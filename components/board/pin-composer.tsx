@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useState } from "react";
+import { useEffect, useId, useRef, useState } from "react";
 import { refusalFor } from "./refusal-words";
 
 // The comment of a new pin, written where it was placed (on bare surface or on a panel).
@@ -8,6 +8,12 @@ export function PinComposer({ onSubmit, onCancel, error, onPanel }: { onSubmit: 
   const [body, setBody] = useState("");
   const id = useId();
   const message = refusalFor(error, "body");
+  const field = useRef<HTMLTextAreaElement>(null);
+  // Focused once the press that placed the pin is over (a press on the board focuses the board).
+  useEffect(() => {
+    const t = setTimeout(() => field.current?.focus(), 0);
+    return () => clearTimeout(t);
+  }, []);
   return (
     <form
       className="absolute bottom-3 left-3 right-3 flex flex-col gap-2 rounded-sheet border border-copper bg-paper p-3 shadow"
@@ -22,7 +28,7 @@ export function PinComposer({ onSubmit, onCancel, error, onPanel }: { onSubmit: 
       </label>
       <textarea
         id={`${id}-body`}
-        autoFocus
+        ref={field}
         rows={2}
         value={body}
         onChange={(e) => setBody(e.target.value)}

@@ -5,7 +5,9 @@
  * Each line measures a stretch [from, to] along one axis ("x" across, "y" up) and sits at `at`
  * on the other axis. `rows` moves it off the surface on the screen, in rows of dimension lines:
  * positive rows go below the surface (x lines) or to its left (y lines); 0 draws the line on
- * the surface itself at `at`; negative rows go above a panel (x) or to its right (y).
+ * the surface itself at `at`; negative rows go above the surface (x) or to its right (y).
+ * Lines drawn off the surface have extension lines back to what they measure, which starts at
+ * `witness` on the other axis (the surface's edge, `at`, unless given).
  */
 import type { BoardSurface, Rect } from "./types";
 
@@ -18,6 +20,7 @@ export interface DimensionLine {
   to: number;
   at: number;
   rows: number;
+  witness?: number;
 }
 
 const MIN_LENGTH = 1e-4;
@@ -46,15 +49,20 @@ export function surfaceDimensions(surface: BoardSurface): DimensionLine[] {
 }
 
 /**
- * A selected panel (or a selection's outline): its distance from the left edge, drawn across
- * the surface at the panel's mid-height, and from the floor, drawn up at its mid-width; its
- * width above it and its height to its right.
+ * A selected panel (or a selection's outline), set out as ordinates from the datum along the
+ * surface's top and right edges, where nothing else is drawn: across the top, a chain from the
+ * left edge to the panel and across its width; up the right, from the floor to the panel and
+ * up its height. Extension lines come down (and across) from the panel's own edges.
  */
-export function panelSetOut(panel: Rect): DimensionLine[] {
+export function panelSetOut(panel: Rect, surface: { width: number; height: number }): DimensionLine[] {
+  const top = panel.y + panel.height;
+  const right = panel.x + panel.width;
+  const across = { axis: "x" as const, at: surface.height, rows: -1, witness: top };
+  const up = { axis: "y" as const, at: surface.width, rows: -1, witness: right };
   return [
-    { kind: "set-out" as const, axis: "x" as const, from: 0, to: panel.x, at: panel.y + panel.height / 2, rows: 0 },
-    { kind: "set-out" as const, axis: "y" as const, from: 0, to: panel.y, at: panel.x + panel.width / 2, rows: 0 },
-    { kind: "size" as const, axis: "x" as const, from: panel.x, to: panel.x + panel.width, at: panel.y + panel.height, rows: -1 },
-    { kind: "size" as const, axis: "y" as const, from: panel.y, to: panel.y + panel.height, at: panel.x + panel.width, rows: -1 },
+    { kind: "set-out" as const, from: 0, to: panel.x, ...across },
+    { kind: "size" as const, from: panel.x, to: right, ...across },
+    { kind: "set-out" as const, from: 0, to: panel.y, ...up },
+    { kind: "size" as const, from: panel.y, to: top, ...up },
   ].filter(keep);
 }

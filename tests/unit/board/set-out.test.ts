@@ -41,17 +41,20 @@ describe("set-out dimensions from the lower-left datum", () => {
     ]);
   });
 
-  it("set a panel out by its distance from the left edge and from the floor, with its size", () => {
-    const dims = panelSetOut({ x: 1.25, y: 0.9, width: 0.6, height: 1.2 });
-    expect(dims).toEqual([
-      { kind: "set-out", axis: "x", from: 0, to: 1.25, at: 1.5, rows: 0 },
-      { kind: "set-out", axis: "y", from: 0, to: 0.9, at: 1.55, rows: 0 },
-      { kind: "size", axis: "x", from: 1.25, to: 1.85, at: 2.1, rows: -1 },
-      { kind: "size", axis: "y", from: 0.9, to: 2.1, at: 1.85, rows: -1 },
+  it("set a panel out from the datum along the top and the right edge, with its size", () => {
+    const dims = panelSetOut({ x: 1.25, y: 0.9, width: 0.6, height: 1.2 }, wall);
+    // Across the top (y = 4.5 m, one row above): 0 → 1.25 (to the panel), 1.25 → 1.85 (its
+    // width), extension lines from its top at 0.9 + 1.2 = 2.1 m. Up the right (x = 9 m): 0 →
+    // 0.9 (to the panel), 0.9 → 2.1 (its height), extension lines from its right edge at 1.85 m.
+    expect(dims.map(({ kind, axis, from, to, at, rows, witness }) => [kind, axis, from, +to.toFixed(12), at, rows, +witness!.toFixed(12)])).toEqual([
+      ["set-out", "x", 0, 1.25, 4.5, -1, 2.1],
+      ["size", "x", 1.25, 1.85, 4.5, -1, 2.1],
+      ["set-out", "y", 0, 0.9, 9, -1, 1.85],
+      ["size", "y", 0.9, 2.1, 9, -1, 1.85],
     ]);
   });
 
   it("leave out a set-out of nothing (a panel on the datum)", () => {
-    expect(panelSetOut({ x: 0, y: 0, width: 0.6, height: 0.6 }).map((d) => d.kind)).toEqual(["size", "size"]);
+    expect(panelSetOut({ x: 0, y: 0, width: 0.6, height: 0.6 }, wall).map((d) => d.kind)).toEqual(["size", "size"]);
   });
 });
