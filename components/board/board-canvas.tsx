@@ -257,7 +257,7 @@ export default function BoardCanvas(p: Props) {
           return (
             <Group key={pin.id} x={at.x} y={at.y} onMouseDown={(e) => (e.cancelBubble = true)} onClick={() => p.onPinSelect(pin.number)} name="pin">
               <Line points={[0, 0, 0, -14]} stroke={INK} strokeWidth={1.5} />
-              <Circle y={-20} radius={focus ? 10 : 8} fill={pin.resolved ? PIN_RESOLVED : COPPER} stroke={focus ? INK : PAPER} strokeWidth={2} />
+              <Circle y={-20} radius={focus ? 10 : 8} fill={pin.resolved ? PIN_RESOLVED : COPPER_DEEP} stroke={focus ? INK : PAPER} strokeWidth={2} />
               <Text x={-8} y={-25} width={16} align="center" text={String(pin.number)} fontSize={10} fontStyle="bold" fill={PAPER} />
             </Group>
           );

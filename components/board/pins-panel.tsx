@@ -28,7 +28,7 @@ function PinItem({ pin, open, onToggle, actions, may }: { pin: PinView; open: bo
   return (
     <li data-pin={pin.number} className={`rounded-sheet border px-3 py-2 text-xs ${pin.resolved ? "border-ink/15 bg-white/40 text-ink-soft" : "border-copper/50 bg-white/70"}`}>
       <button type="button" className="flex w-full items-start gap-2 text-left" onClick={onToggle}>
-        <span className={`figures inline-flex h-5 w-5 shrink-0 items-center justify-center rounded-full text-[10px] font-semibold ${pin.resolved ? "bg-ink/20 text-ink" : "bg-copper text-paper"}`}>{pin.number}</span>
+        <span className={`figures inline-flex h-5 w-5 shrink-0 items-center justify-center rounded-full text-[10px] font-semibold ${pin.resolved ? "bg-ink/20 text-ink" : "bg-copper-deep text-paper"}`}>{pin.number}</span>
         <span className="min-w-0">
           <span className="block">{pin.body}</span>
           <span className="mt-0.5 block text-[10px] text-ink-faint">
