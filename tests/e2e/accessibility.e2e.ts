@@ -68,6 +68,13 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     sessions.push(s);
     await s.goto("/sign-in");
     await check(s, "Sign in", "signed out");
+    // The page names its manifest and icon, served from public/, and the brand mark loads.
+    const manifest = await s.page.locator('link[rel="manifest"]').getAttribute("href");
+    const served = await s.page.request.get(s.url(manifest!));
+    expect(served.status()).toBe(200);
+    expect(((await served.json()) as { icons: unknown[] }).icons).toHaveLength(3);
+    expect(await s.page.locator('link[rel="icon"][type="image/svg+xml"]').getAttribute("href")).toBe("/icon.svg");
+    expect(await s.page.locator('img[src="/icon.svg"]').evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
     await s.page.goto(s.url("/no-such-page"));
     await check(s, "Not found", "signed out");
   });
