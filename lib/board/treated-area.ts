@@ -9,8 +9,9 @@
  *
  * The method: cut the surface into vertical slabs at every panel and opening edge; inside a
  * slab every covering rectangle spans its full width, so the slab's y intervals decide who
- * owns each piece. For a board laid out in rows and columns there are few distinct edges and
- * the work is small enough to run on every frame of a drag (tests/bench/board-drag.ts).
+ * owns each piece. The slabs are swept left to right with a list of the panels open at the
+ * current x, so each slab looks only at its own panels; for a board of 500 panels this runs
+ * on every frame of a drag (tests/bench/board-drag.ts).
  */
 import type { BoardSurface, Placement } from "./types";
 
@@ -55,76 +56,112 @@ interface Box {
   x1: number;
   y0: number;
   y1: number;
-  /** the panel's build-up; null for an opening */
-  buildUpId: string | null;
+  /** the panel's place in the list (the later one lies on top); -1 for an opening */
+  order: number;
+  /** its build-up's number in `ids` */
+  kind: number;
 }
 
-function clip(r: { x: number; y: number; width: number; height: number }, surface: SurfaceShape, buildUpId: string | null): Box | null {
+function clip(r: { x: number; y: number; width: number; height: number }, surface: SurfaceShape, order: number, kind: number): Box | null {
   const x0 = Math.max(0, r.x);
   const x1 = Math.min(surface.width, r.x + r.width);
   const y0 = Math.max(0, r.y);
   const y1 = Math.min(surface.height, r.y + r.height);
-  return x1 > x0 && y1 > y0 ? { x0, x1, y0, y1, buildUpId } : null;
+  return x1 > x0 && y1 > y0 ? { x0, x1, y0, y1, order, kind } : null;
+}
+
+/** First index in the sorted `values[0..n)` not below `v`. */
+function lowerBound(values: Float64Array, n: number, v: number): number {
+  let lo = 0;
+  let hi = n;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (values[mid] < v) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** The area of one surface's panels that counts, per build-up, and where the rest went. */
 export function countSurface(surface: SurfaceShape, placements: readonly Panel[]): SurfaceCount {
   const account: AreaAccount = { placed: 0, counted: 0, outside: 0, overlapping: 0, overOpenings: 0 };
-  const byBuildUp = new Map<string, number>();
+  const ids: string[] = [];
+  const kindOf = new Map<string, number>();
   const panels: Box[] = [];
   let inside = 0;
-  for (const p of placements) {
-    const full = Math.max(0, p.width) * Math.max(0, p.height);
-    account.placed += full;
-    if (!byBuildUp.has(p.buildUpId)) byBuildUp.set(p.buildUpId, 0);
-    const box = clip(p, surface, p.buildUpId);
+  placements.forEach((p, i) => {
+    account.placed += Math.max(0, p.width) * Math.max(0, p.height);
+    let kind = kindOf.get(p.buildUpId);
+    if (kind === undefined) kindOf.set(p.buildUpId, (kind = ids.push(p.buildUpId) - 1));
+    const box = clip(p, surface, i, kind);
     if (box) {
       panels.push(box);
       inside += (box.x1 - box.x0) * (box.y1 - box.y0);
     }
-  }
+  });
   account.outside = Math.max(0, account.placed - inside);
-  if (panels.length === 0) return { byBuildUp, account };
-  const openings = surface.openings.map((o) => clip(o, surface, null)).filter((b): b is Box => b !== null);
+  const areas = new Float64Array(ids.length);
+  if (panels.length > 0) {
+    const openings = surface.openings.map((o) => clip(o, surface, -1, -1)).filter((b): b is Box => b !== null);
+    const union = sweepSlabs(panels, openings, areas, account);
+    account.overlapping = Math.max(0, inside - union);
+  }
+  const byBuildUp = new Map<string, number>();
+  ids.forEach((id, k) => {
+    byBuildUp.set(id, areas[k]);
+    account.counted += areas[k];
+  });
+  return { byBuildUp, account };
+}
 
-  const xs = new Set<number>();
-  for (const b of panels) xs.add(b.x0).add(b.x1);
-  for (const b of openings) xs.add(b.x0).add(b.x1);
-  const edges = [...xs].sort((a, b) => a - b);
+/** Adds each piece's area to its top panel's build-up (or to overOpenings); returns the union. */
+function sweepSlabs(panels: Box[], openings: Box[], areas: Float64Array, account: AreaAccount): number {
+  const edges = [...new Set([...panels, ...openings].flatMap((b) => [b.x0, b.x1]))].sort((a, b) => a - b);
+  const byLeft = [...panels].sort((a, b) => a.x0 - b.x0);
+  const active: Box[] = [];
+  const ys = new Float64Array(2 * (panels.length + openings.length));
+  const owner = new Int32Array(ys.length);
+  const kindAt = new Int32Array(ys.length);
+  const open = new Uint8Array(ys.length);
+  let next = 0;
   let union = 0;
-  const activePanels: Box[] = [];
-  const activeOpenings: Box[] = [];
-  const ys: number[] = [];
   for (let i = 0; i + 1 < edges.length; i++) {
     const xa = edges[i];
-    const xb = edges[i + 1];
-    const w = xb - xa;
-    activePanels.length = 0;
-    for (const b of panels) if (b.x0 <= xa && b.x1 >= xb) activePanels.push(b);
-    if (activePanels.length === 0) continue;
-    activeOpenings.length = 0;
-    for (const b of openings) if (b.x0 <= xa && b.x1 >= xb) activeOpenings.push(b);
-    ys.length = 0;
-    for (const b of activePanels) ys.push(b.y0, b.y1);
-    for (const b of activeOpenings) ys.push(b.y0, b.y1);
-    ys.sort((a, b) => a - b);
-    for (let j = 0; j + 1 < ys.length; j++) {
-      const ya = ys[j];
-      const yb = ys[j + 1];
-      if (!(yb > ya)) continue;
-      // The panel on top is the last in the list that covers this piece.
-      let owner: Box | null = null;
-      for (const b of activePanels) if (b.y0 <= ya && b.y1 >= yb) owner = b;
-      if (!owner) continue;
-      const piece = w * (yb - ya);
+    const w = edges[i + 1] - xa;
+    // Panels that ended before this slab leave the list; those that start at it join.
+    let kept = 0;
+    for (const b of active) if (b.x1 > xa) active[kept++] = b;
+    active.length = kept;
+    while (next < byLeft.length && byLeft[next].x0 <= xa) {
+      const b = byLeft[next++];
+      if (b.x1 > xa) active.push(b);
+    }
+    if (active.length === 0) continue;
+    let n = 0;
+    for (const b of active) (ys[n++] = b.y0), (ys[n++] = b.y1);
+    const here = openings.filter((o) => o.x0 <= xa && o.x1 > xa);
+    for (const o of here) (ys[n++] = o.y0), (ys[n++] = o.y1);
+    ys.subarray(0, n).sort();
+    // Distinct y values, in place; the piece [ys[j], ys[j+1]) goes to the top panel over it.
+    let m = 0;
+    for (let j = 0; j < n; j++) if (m === 0 || ys[j] !== ys[m - 1]) ys[m++] = ys[j];
+    owner.fill(-1, 0, m);
+    open.fill(0, 0, m);
+    for (const b of active) {
+      for (let j = lowerBound(ys, m, b.y0), end = lowerBound(ys, m, b.y1); j < end; j++) {
+        if (b.order > owner[j]) (owner[j] = b.order), (kindAt[j] = b.kind);
+      }
+    }
+    for (const o of here) for (let j = lowerBound(ys, m, o.y0), end = lowerBound(ys, m, o.y1); j < end; j++) open[j] = 1;
+    for (let j = 0; j + 1 < m; j++) {
+      if (owner[j] < 0) continue;
+      const piece = w * (ys[j + 1] - ys[j]);
       union += piece;
-      if (activeOpenings.some((o) => o.y0 <= ya && o.y1 >= yb)) account.overOpenings += piece;
-      else byBuildUp.set(owner.buildUpId!, (byBuildUp.get(owner.buildUpId!) ?? 0) + piece);
+      if (open[j]) account.overOpenings += piece;
+      else areas[kindAt[j]] += piece;
     }
   }
-  account.overlapping = Math.max(0, inside - union);
-  for (const area of byBuildUp.values()) account.counted += area;
-  return { byBuildUp, account };
+  return union;
 }
 
 /**
