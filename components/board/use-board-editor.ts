@@ -43,7 +43,16 @@ type Args = {
 export function useBoardEditor({ initial, board, surface, scale, schedule }: Args) {
   const [history, setHistory] = useState<History<readonly Placement[]>>(() => createHistory<readonly Placement[]>(toPlacements(initial)));
   const placements = history.present.state;
-  const [selected, setSelected] = useState<Set<string>>(new Set());
+  const [selected, setSelectedState] = useState<Set<string>>(new Set());
+  // The latest placements and selection, for keys pressed faster than the screen redraws (a
+  // held arrow or Tab key): each press must start from the one before, not from the last render.
+  const latest = useRef({ placements, selected });
+  latest.current = { placements, selected };
+  const setSelected = useCallback((next: Set<string> | ((cur: Set<string>) => Set<string>)) => {
+    const value = typeof next === "function" ? next(latest.current.selected) : next;
+    latest.current = { ...latest.current, selected: value };
+    setSelectedState(value);
+  }, []);
   const [gridModule, setGridModuleState] = useState(initial.gridModule);
   const [guides, setGuides] = useState<SnapGuide[]>([]);
   const [live, setLive] = useState<{ id: string; rect: Rect } | null>(null);
@@ -55,6 +64,7 @@ export function useBoardEditor({ initial, board, surface, scale, schedule }: Arg
 
   const change = useCallback(
     (next: readonly Placement[], label: string) => {
+      latest.current = { ...latest.current, placements: next };
       setHistory((h) => push(h, next, label));
       schedule(next, gridModule);
     },
@@ -172,13 +182,15 @@ export function useBoardEditor({ initial, board, surface, scale, schedule }: Arg
   }
 
   function removeSelected() {
-    change(removePlacements(placements, selected), `Delete ${selected.size}`);
+    const now = latest.current;
+    change(removePlacements(now.placements, now.selected), `Delete ${now.selected.size}`);
     setSelected(new Set());
   }
 
   function duplicateSelected() {
-    const made = duplicate(placements.filter((p) => selected.has(p.id)), { x: gridModule, y: 0 }, { taken: placements });
-    change(addPlacements(placements, made), `Duplicate ${made.length}`);
+    const now = latest.current;
+    const made = duplicate(now.placements.filter((p) => now.selected.has(p.id)), { x: gridModule, y: 0 }, { taken: now.placements });
+    change(addPlacements(now.placements, made), `Duplicate ${made.length}`);
     setSelected(new Set(made.map((m) => m.id)));
   }
 
@@ -197,6 +209,8 @@ export function useBoardEditor({ initial, board, surface, scale, schedule }: Arg
 
   return {
     placements,
+    /** the placements and selection as of the last change, even before the screen redraws */
+    latest,
     shown,
     live,
     guides,

@@ -31,7 +31,8 @@ export function useBoardKeys(editor: BoardEditor, opts: { editable: boolean; onE
   }, [undo, redo, opts.editable]);
 
   return function onBoardKey(e: KeyboardEvent<HTMLElement>) {
-    const { placements, selected, setSelected, gridModule } = editor;
+    const { setSelected, gridModule } = editor;
+    const { placements, selected } = editor.latest.current;
     const mod = e.ctrlKey || e.metaKey;
     if (e.key === "Tab") {
       const next = stepSelection(placements, [...selected][0] ?? null, e.shiftKey ? -1 : 1);

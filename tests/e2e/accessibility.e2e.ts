@@ -8,6 +8,8 @@ import { keyboardWalk } from "./support/keyboard";
 // (every stop shows its focus, and the focus never gets stuck). A summary per screen and role
 // is printed and written to tests/e2e/screens/axe-summary.md.
 const ARTS = "Lantern Row Arts Centre refit (fictional)";
+/** A role's whole round of screens, on a machine shared with other work. */
+const ROUND_MS = 300_000;
 
 async function check(s: Session, screen: string, role: string) {
   const a = await audit(s.page, screen, role);
@@ -77,7 +79,7 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     expect(await s.page.locator('img[src="/icon.svg"]').evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
     await s.page.goto(s.url("/no-such-page"));
     await check(s, "Not found", "signed out");
-  });
+  }, ROUND_MS);
 
   it("consultant", async () => {
     const s = await signedIn("consultant@example.test");
@@ -85,7 +87,7 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await designScreens(s, "consultant");
     await s.goto("/settings");
     await check(s, "Settings", "consultant");
-  });
+  }, ROUND_MS);
 
   it("invited, signed out: the invitation's sign-up page", async () => {
     const consultant = await signedIn("consultant@example.test");
@@ -101,13 +103,13 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await s.page.goto(link);
     await s.page.getByRole("heading", { name: /Join Lantern Row/ }).waitFor();
     await check(s, "Invitation sign-up", "invited");
-  });
+  }, ROUND_MS);
 
   it("architect (read only)", async () => {
     const s = await signedIn("architect@example.test");
     await check(s, "Projects", "architect");
     await designScreens(s, "architect");
-  });
+  }, ROUND_MS);
 
   it("installer", async () => {
     const s = await signedIn("installer@example.test");
@@ -116,14 +118,14 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await check(s, "Project overview", "installer");
     await s.goto("/settings");
     await check(s, "Settings", "installer");
-  });
+  }, ROUND_MS);
 
   it("client", async () => {
     const s = await signedIn("client@example.test");
     await check(s, "Projects", "client");
     await openProject(s);
     await check(s, "Project overview", "client");
-  });
+  }, ROUND_MS);
 
   it("firm administrator", async () => {
     const s = await signedIn("admin@example.test");
@@ -133,5 +135,5 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await check(s, "Firm accounts", "firm admin");
     await s.goto("/settings");
     await check(s, "Settings", "firm admin");
-  });
+  }, ROUND_MS);
 });

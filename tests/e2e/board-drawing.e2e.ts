@@ -80,6 +80,20 @@ describe("the board, drawn and worked by keyboard", () => {
     expect(await page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).not.toBe("board-canvas");
   });
 
+  it("keys pressed faster than the screen redraws each count (a held arrow key)", async () => {
+    const page = s.page;
+    await page.getByTestId("board-canvas").focus();
+    await page.keyboard.press("Escape");
+    await page.keyboard.press("Tab");
+    // Five presses in one task, before React can redraw between them: P-001 goes 5 × 10 mm right.
+    await page.getByTestId("board-canvas").evaluate((el) => {
+      for (let i = 0; i < 5; i++) el.dispatchEvent(new KeyboardEvent("keydown", { key: "ArrowRight", bubbles: true }));
+    });
+    await expect.poll(() => page.getByTestId("announce-selection").textContent()).toMatch(/^P-001 selected: .* 650 mm from the left/);
+    for (let i = 0; i < 5; i++) await page.keyboard.press("Control+z");
+    await expect.poll(() => page.getByTestId("announce-selection").textContent()).toMatch(/ 600 mm from the left/);
+  });
+
   it("moving a panel across two others by keyboard takes the overlap out of the check", async () => {
     const page = s.page;
     // 16 × 0.6 × 2.4 = 23.04 m² placed and counted.
