@@ -20,7 +20,14 @@ export const FIELD_WORDS: Record<string, string> = {
 
 // A save the server refused: each reason in its own words, with the panel it is about (a
 // button that selects it, so its fields show the same message).
-export function SaveRefusal({ message, issues, onShow }: { message: string; issues: readonly BoardIssue[]; onShow: (placementId: string) => void }) {
+export function SaveRefusal({ failure, message, issues, onShow }: { failure: "refused" | "retrying"; message: string; issues: readonly BoardIssue[]; onShow: (placementId: string) => void }) {
+  if (failure === "retrying") {
+    return (
+      <Notice tone="caution" title="Not saved yet">
+        {message}
+      </Notice>
+    );
+  }
   return (
     <Notice tone="fault" title="Not saved: the server refused this board">
       {issues.length === 0 ? (

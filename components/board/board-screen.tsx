@@ -104,8 +104,8 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
         <InstallCaution kind={surface.kind} high={high} units={units} onShow={show} />
         {save.state === "conflict" ? (
           <SaveNotices what="board" conflict={save.message ?? ""} onReload={reload} error={null} />
-        ) : save.issues.length > 0 || (save.message && save.state !== "saved") ? (
-          <SaveRefusal message={save.message ?? ""} issues={save.issues} onShow={(pid) => show([pid])} />
+        ) : save.failure ? (
+          <SaveRefusal failure={save.failure} message={save.message ?? ""} issues={save.issues} onShow={(pid) => show([pid])} />
         ) : null}
       </div>
       <div className="grid gap-5 xl:grid-cols-[220px_1fr_300px]">

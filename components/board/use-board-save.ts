@@ -48,5 +48,7 @@ export function useBoardSave(board: Pick<BoardView, "projectId" | "roomId" | "su
   // Stable functions: the board's memoised panels take callbacks that use them.
   const schedule = useCallback((placements: readonly Placement[], gridModule: number) => void (enabled && saver.schedule({ placements, gridModule })), [enabled, saver]);
   const reset = useCallback((v: number) => saver.reset(v), [saver]);
-  return { version: snap.version, state: snap.state, message, issues, schedule, reset };
+  /** why the last send failed, while it stands: refused by the server, or not answered (sent again) */
+  const failure = error === null || snap.state === "conflict" ? null : classify(error) === "refused" ? ("refused" as const) : ("retrying" as const);
+  return { version: snap.version, state: snap.state, message, issues, failure, schedule, reset };
 }
