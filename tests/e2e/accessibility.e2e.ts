@@ -109,6 +109,8 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     const s = await signedIn("architect@example.test");
     await check(s, "Projects", "architect");
     await designScreens(s, "architect");
+    await s.goto("/settings");
+    await check(s, "Settings", "architect");
   }, ROUND_MS);
 
   it("installer", async () => {
@@ -125,6 +127,8 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await check(s, "Projects", "client");
     await openProject(s);
     await check(s, "Project overview", "client");
+    await s.goto("/settings");
+    await check(s, "Settings", "client");
   }, ROUND_MS);
 
   it("firm administrator", async () => {
