@@ -9,9 +9,9 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: "#f6f2e9", deep: "#ece5d6", edge: "#d9cfbb" },
-        ink: { DEFAULT: "#1a2740", soft: "#44506a", faint: "#7c8598" },
+        ink: { DEFAULT: "#1a2740", soft: "#44506a", faint: "#566075" },
         copper: { DEFAULT: "#b0602f", soft: "#e9c8b0", deep: "#8a4520" },
-        caution: { DEFAULT: "#c98a12", soft: "#f5e3b8" },
+        caution: { DEFAULT: "#c98a12", soft: "#f5e3b8", deep: "#8a5d0a" },
         fault: { DEFAULT: "#a8281f", soft: "#f3d3cf" },
         sage: { DEFAULT: "#4f6f52", soft: "#d9e4d6" },
       },

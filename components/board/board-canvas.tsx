@@ -1,23 +1,22 @@
 "use client";
 
-import { memo, useEffect, useMemo, useRef, useState } from "react";
-import { Circle, Group, Image as KonvaImage, Layer, Line, Rect, Shape, Stage, Text } from "react-konva";
+import { useMemo, useRef, useState } from "react";
+import { Circle, Group, Image as KonvaImage, Layer, Line, Rect, Stage, Text } from "react-konva";
 import type Konva from "konva";
 import type { BoardOpening, Placement, Rect as BoardRect } from "@/lib/board/types";
 import type { RuleBreak } from "@/lib/board/rules";
 import type { SnapGuide } from "@/lib/board/snap";
 import type { ResizeHandle } from "@/lib/board/resize";
-import { panelPattern, visibleDetail } from "@/lib/board/pattern";
+import { panelSetOut, surfaceDimensions } from "@/lib/board/set-out";
 import type { BoardView } from "@/lib/services/boards";
+import type { UnitPreference } from "@/lib/units";
 import { pinchZoomFactor, toScreen as screenOf, toWorld as worldOf, wheelZoomFactor, type View } from "@/lib/board/view";
+import { COPPER, COPPER_DEEP, INK, INK_SOFT, OPENING_FILL, PAPER, PIN_RESOLVED } from "./canvas/colours";
+import { DimensionLines, dimensionText } from "./canvas/dimension-lines";
+import { PanelShape } from "./canvas/panel-shape";
+import { ResizeHandles } from "./canvas/resize-handles";
 
-export type ViewTransform = View;
 export type CanvasMode = "select" | "draw" | "pin" | "scale";
-
-const INK = "#1a2740";
-const COPPER = "#b0602f";
-const FAULT = "#a8281f";
-const CAUTION = "#c98a12";
 
 const toScreen = (v: View, x: number, y: number) => screenOf(v, { x, y });
 const toWorld = (v: View, px: number, py: number) => worldOf(v, { x: px, y: py });
@@ -27,11 +26,14 @@ type Facing = BoardView["buildUps"][number];
 type Props = {
   width: number;
   height: number;
-  view: ViewTransform;
+  view: View;
+  units: UnitPreference;
   surface: { width: number; height: number; openings: readonly BoardOpening[] };
   gridModule: number;
   placements: readonly Placement[];
   selected: ReadonlySet<string>;
+  /** the selected panel, or the selection's outline, to dimension from the datum */
+  setOut: BoardRect | null;
   buildUps: ReadonlyMap<string, Facing>;
   breaks: ReadonlyMap<string, RuleBreak[]>;
   guides: readonly SnapGuide[];
@@ -41,6 +43,8 @@ type Props = {
   scalePoints: { x: number; y: number }[];
   mode: CanvasMode;
   editable: boolean;
+  /** what a box drawn in draw mode becomes (snapped to the module and the grid) */
+  snapDrawn: (rect: BoardRect) => BoardRect;
   onSelect: (ids: string[], additive: boolean) => void;
   onDragStart: (id: string) => void;
   onDragMove: (id: string, rect: BoardRect) => BoardRect;
@@ -55,8 +59,8 @@ type Props = {
   onMarquee: (rect: BoardRect, additive: boolean) => void;
 };
 
-// The board, drawn to scale with Konva: the surface with its openings and dimension lines, the
-// grid, the reference drawing underneath, the panels with their facing pattern, rule marks,
+// The board, drawn to scale with Konva: the surface with its openings and set-out dimensions,
+// the grid, the reference drawing underneath, the panels with their facing pattern, rule marks,
 // snap guides and review pins. Pointer work is kept inside Konva while a drag lasts; React
 // hears of it only through the callbacks, so 500 panels stay smooth.
 export default function BoardCanvas(p: Props) {
@@ -77,6 +81,16 @@ export default function BoardCanvas(p: Props) {
     const b = toWorld(v, p.width, 0);
     return { x: a.x, y: a.y, width: b.x - a.x, height: b.y - a.y };
   }, [v, p.width, p.height]);
+
+  const dimensions = useMemo(() => surfaceDimensions(p.surface), [p.surface]);
+  const setOut = useMemo(() => (p.setOut ? panelSetOut(p.setOut, p.surface) : []), [p.setOut, p.surface]);
+  const drawnBox = marquee && {
+    x: Math.min(marquee.x0, marquee.x1),
+    y: Math.min(marquee.y0, marquee.y1),
+    width: Math.abs(marquee.x1 - marquee.x0),
+    height: Math.abs(marquee.y1 - marquee.y0),
+  };
+  const shownBox = drawnBox && p.mode === "draw" && p.editable ? p.snapDrawn(drawnBox) : drawnBox;
 
   const gridLines = useMemo(() => {
     const m = p.gridModule;
@@ -100,7 +114,9 @@ export default function BoardCanvas(p: Props) {
       panning.current = { x: w.px, y: w.py };
       return;
     }
-    if (p.mode === "pin" && onEmpty) return p.onPinAt(w.x, w.y);
+    // A pin goes where the person points, on bare surface or on a panel (pins themselves
+    // stop the press, so clicking one opens it).
+    if (p.mode === "pin") return p.onPinAt(w.x, w.y);
     if (p.mode === "scale") return p.onScalePick(w.x, w.y);
     if (onEmpty && (p.mode === "select" || p.mode === "draw")) setMarquee({ x0: w.x, y0: w.y, x1: w.x, y1: w.y });
   }
@@ -122,7 +138,7 @@ export default function BoardCanvas(p: Props) {
     const rect = { x: Math.min(marquee.x0, marquee.x1), y: Math.min(marquee.y0, marquee.y1), width: Math.abs(marquee.x1 - marquee.x0), height: Math.abs(marquee.y1 - marquee.y0) };
     setMarquee(null);
     const tiny = rect.width * v.scale < 4 && rect.height * v.scale < 4;
-    if (p.mode === "draw" && p.editable && !tiny) return p.onDrawn(rect);
+    if (p.mode === "draw" && p.editable && !tiny) return p.onDrawn(p.snapDrawn(rect));
     if (tiny) return p.onSelect([], e.evt.shiftKey);
     p.onMarquee(rect, e.evt.shiftKey);
   }
@@ -154,7 +170,7 @@ export default function BoardCanvas(p: Props) {
       style={{ cursor: p.mode === "pin" ? "crosshair" : p.mode === "draw" || p.mode === "scale" ? "copy" : "default" }}
     >
       <Layer listening={true}>
-        <Rect name="surface" x={origin.x} y={corner.y} width={corner.x - origin.x} height={origin.y - corner.y} fill="#fffdf8" stroke={INK} strokeWidth={1.5} />
+        <Rect name="surface" x={origin.x} y={corner.y} width={corner.x - origin.x} height={origin.y - corner.y} fill={PAPER} stroke={INK} strokeWidth={1.5} />
         {p.drawing && (
           <KonvaImage
             name="drawing"
@@ -173,14 +189,14 @@ export default function BoardCanvas(p: Props) {
           const a = s(o.x, o.y + o.height);
           return (
             <Group key={i} listening={false}>
-              <Rect x={a.x} y={a.y} width={o.width * v.scale} height={o.height * v.scale} fill="#ece5d6" stroke={INK} strokeWidth={1} dash={[5, 3]} />
+              <Rect x={a.x} y={a.y} width={o.width * v.scale} height={o.height * v.scale} fill={OPENING_FILL} stroke={INK} strokeWidth={1} dash={[5, 3]} />
               <Line points={[a.x, a.y, a.x + o.width * v.scale, a.y + o.height * v.scale]} stroke={INK} strokeWidth={0.5} opacity={0.4} />
               <Line points={[a.x + o.width * v.scale, a.y, a.x, a.y + o.height * v.scale]} stroke={INK} strokeWidth={0.5} opacity={0.4} />
-              <Text x={a.x + 4} y={a.y + 4} text={o.name || o.kind} fontSize={11} fill="#44506a" />
+              <Text x={a.x + 4} y={a.y + 4} width={Math.max(40, o.width * v.scale - 8)} text={`${o.name || o.kind}\n${dimensionText(o.width, p.units)} × ${dimensionText(o.height, p.units)}`} fontSize={11} lineHeight={1.3} fill={INK_SOFT} />
             </Group>
           );
         })}
-        <Dimensions origin={origin} corner={corner} width={p.surface.width} height={p.surface.height} />
+        <DimensionLines lines={dimensions} view={v} units={p.units} />
       </Layer>
       <Layer>
         {p.placements.map((pl) => (
@@ -193,6 +209,7 @@ export default function BoardCanvas(p: Props) {
             selected={p.selected.has(pl.id)}
             broken={p.breaks.get(pl.id)}
             draggable={p.editable && p.mode === "select"}
+            pinMode={p.mode === "pin"}
             onSelect={p.onSelect}
             onDragStart={p.onDragStart}
             onDragMove={p.onDragMove}
@@ -208,6 +225,9 @@ export default function BoardCanvas(p: Props) {
             .map((pl) => <ResizeHandles key={pl.id} placement={pl} view={v} onResize={p.onResize} />)}
       </Layer>
       <Layer ref={dragLayer} />
+      <Layer listening={false}>
+        <DimensionLines lines={setOut} view={v} units={p.units} colour={COPPER_DEEP} />
+      </Layer>
       {/* Guides, the marquee and pins change on every pointer move: a layer of their own, so
           the panels' layer is not redrawn with them. */}
       <Layer>
@@ -216,12 +236,12 @@ export default function BoardCanvas(p: Props) {
           const b = g.axis === "x" ? s(g.at, g.to) : s(g.to, g.at);
           return <Line key={i} points={[a.x, a.y, b.x, b.y]} stroke={COPPER} strokeWidth={1} dash={[4, 3]} listening={false} />;
         })}
-        {marquee && (
+        {shownBox && (
           <Rect
-            x={Math.min(s(marquee.x0, 0).x, s(marquee.x1, 0).x)}
-            y={Math.min(s(0, marquee.y0).y, s(0, marquee.y1).y)}
-            width={Math.abs(marquee.x1 - marquee.x0) * v.scale}
-            height={Math.abs(marquee.y1 - marquee.y0) * v.scale}
+            x={s(shownBox.x, 0).x}
+            y={s(0, shownBox.y + shownBox.height).y}
+            width={shownBox.width * v.scale}
+            height={shownBox.height * v.scale}
             stroke={COPPER}
             dash={[4, 3]}
             fill={p.mode === "draw" ? "rgba(176,96,47,0.10)" : "rgba(26,39,64,0.05)"}
@@ -237,181 +257,12 @@ export default function BoardCanvas(p: Props) {
           return (
             <Group key={pin.id} x={at.x} y={at.y} onMouseDown={(e) => (e.cancelBubble = true)} onClick={() => p.onPinSelect(pin.number)} name="pin">
               <Line points={[0, 0, 0, -14]} stroke={INK} strokeWidth={1.5} />
-              <Circle y={-20} radius={focus ? 10 : 8} fill={pin.resolved ? "#7c8598" : COPPER} stroke={focus ? INK : "#fffdf8"} strokeWidth={2} />
-              <Text x={-8} y={-25} width={16} align="center" text={String(pin.number)} fontSize={10} fontStyle="bold" fill="#fffdf8" />
+              <Circle y={-20} radius={focus ? 10 : 8} fill={pin.resolved ? PIN_RESOLVED : COPPER_DEEP} stroke={focus ? INK : PAPER} strokeWidth={2} />
+              <Text x={-8} y={-25} width={16} align="center" text={String(pin.number)} fontSize={10} fontStyle="bold" fill={PAPER} />
             </Group>
           );
         })}
       </Layer>
     </Stage>
-  );
-}
-
-function Dimensions({ origin, corner, width, height }: { origin: { x: number; y: number }; corner: { x: number; y: number }; width: number; height: number }) {
-  const mm = (m: number) => `${Math.round(m * 1000)}`;
-  const below = origin.y + 22;
-  const left = origin.x - 22;
-  return (
-    <Group listening={false}>
-      <Line points={[origin.x, below, corner.x, below]} stroke={INK} strokeWidth={0.8} />
-      <Line points={[origin.x, below - 5, origin.x, below + 5]} stroke={INK} strokeWidth={0.8} />
-      <Line points={[corner.x, below - 5, corner.x, below + 5]} stroke={INK} strokeWidth={0.8} />
-      <Text x={(origin.x + corner.x) / 2 - 40} y={below + 4} width={80} align="center" text={mm(width)} fontSize={11} fill={INK} />
-      <Line points={[left, origin.y, left, corner.y]} stroke={INK} strokeWidth={0.8} />
-      <Line points={[left - 5, origin.y, left + 5, origin.y]} stroke={INK} strokeWidth={0.8} />
-      <Line points={[left - 5, corner.y, left + 5, corner.y]} stroke={INK} strokeWidth={0.8} />
-      <Text x={left - 8} y={(origin.y + corner.y) / 2 + 40} width={80} rotation={-90} align="center" text={mm(height)} fontSize={11} fill={INK} />
-    </Group>
-  );
-}
-
-type PanelProps = {
-  placement: Placement;
-  view: ViewTransform;
-  viewport: BoardRect;
-  facing: Facing | undefined;
-  selected: boolean;
-  broken: RuleBreak[] | undefined;
-  draggable: boolean;
-  onSelect: Props["onSelect"];
-  onDragStart: Props["onDragStart"];
-  onDragMove: Props["onDragMove"];
-  onDragEnd: Props["onDragEnd"];
-  dragLayer: React.RefObject<Konva.Layer | null>;
-};
-
-// One panel. Memoised on its placement object, so moving one panel redraws one panel.
-const PanelShape = memo(function PanelShape({ placement: pl, view: v, viewport, facing, selected, broken, draggable, onSelect, onDragStart, onDragMove, onDragEnd, dragLayer }: PanelProps) {
-  const home = useRef<Konva.Container | null>(null);
-  const a = toScreen(v, pl.x, pl.y + pl.height);
-  const w = pl.width * v.scale;
-  const h = pl.height * v.scale;
-  const detail = facing ? visibleDetail(v.scale, facing.facing) : null;
-  const marks = detail?.mode === "marks";
-  // The pattern is worked out once per panel and view, not on every redraw of the layer.
-  const pattern = useMemo(
-    () => (facing ? panelPattern(facing.facing, pl, { borderX: facing.borderX, borderY: facing.borderY }, { scale: v.scale, clip: viewport }) : null),
-    [facing, pl, v.scale, viewport],
-  );
-  const stroke = broken?.length ? (broken.some((b) => b.rule === "overlap" || b.rule === "outside" || b.rule === "over-opening") ? FAULT : CAUTION) : selected ? COPPER : INK;
-  const toRect = (node: Konva.Node): BoardRect => {
-    const world = toWorld(v, node.x(), node.y());
-    return { x: world.x, y: world.y - pl.height, width: pl.width, height: pl.height };
-  };
-  return (
-    <Group
-      x={a.x}
-      y={a.y}
-      draggable={draggable}
-      name="panel"
-      data-id={pl.id}
-      onMouseDown={(e) => {
-        e.cancelBubble = true;
-        onSelect([pl.id], e.evt.shiftKey);
-      }}
-      onDragStart={(e) => {
-        home.current = e.target.getParent();
-        if (dragLayer.current) e.target.moveTo(dragLayer.current);
-        onDragStart(pl.id);
-      }}
-      onDragMove={(e) => {
-        const snapped = onDragMove(pl.id, toRect(e.target));
-        const at = toScreen(v, snapped.x, snapped.y + snapped.height);
-        e.target.position(at);
-      }}
-      onDragEnd={(e) => {
-        const rect = toRect(e.target);
-        if (home.current) e.target.moveTo(home.current);
-        onDragEnd(pl.id, rect);
-      }}
-    >
-      <Rect width={w} height={h} fill={selected ? "#f3e3d6" : "#efe9dc"} stroke={stroke} strokeWidth={selected || broken?.length ? 2 : 1} />
-      {facing && pattern && (
-        <Shape
-          listening={false}
-          sceneFunc={(ctx) => {
-            // Zoomed out: a tone over the perforated field as dark as its open area; zoomed in:
-            // the holes or slots at true scale, only those on screen.
-            const fx = (pattern.field.x - pl.x) * v.scale;
-            const fy = (pl.y + pl.height - pattern.field.y - pattern.field.height) * v.scale;
-            if (!marks || (!pattern.holes && !pattern.slots)) {
-              ctx.fillStyle = `rgba(26,39,64,${(0.15 + 0.85 * pattern.detail.tone).toFixed(3)})`;
-              ctx.fillRect(fx, fy, pattern.field.width * v.scale, pattern.field.height * v.scale);
-              return;
-            }
-            ctx.beginPath();
-            if (pattern.holes) {
-              const r = (facing.facing.kind === "slots" ? 0 : (facing.facing.holeDiameter ?? 0)) * 0.5 * v.scale;
-              const holes = pattern.holes;
-              for (let i = 0; i < holes.length; i += 2) {
-                const hx = (holes[i] - pl.x) * v.scale;
-                const hy = (pl.y + pl.height - holes[i + 1]) * v.scale;
-                ctx.moveTo(hx + r, hy);
-                ctx.arc(hx, hy, r, 0, Math.PI * 2);
-              }
-            }
-            if (pattern.slots) {
-              const slots = pattern.slots;
-              for (let i = 0; i < slots.length; i += 4) {
-                ctx.rect((slots[i] - pl.x) * v.scale, (pl.y + pl.height - slots[i + 1] - slots[i + 3]) * v.scale, slots[i + 2] * v.scale, slots[i + 3] * v.scale);
-              }
-            }
-            ctx.fillStyle = INK;
-            ctx.fill();
-          }}
-        />
-      )}
-      {w > 34 && h > 16 && <Text x={4} y={4} text={pl.code ?? ""} fontSize={10} fill={INK} listening={false} />}
-      {broken?.length ? <Text x={w - 14} y={2} text="!" fontSize={13} fontStyle="bold" fill={stroke} listening={false} /> : null}
-    </Group>
-  );
-});
-
-const HANDLES: { handle: ResizeHandle; fx: number; fy: number }[] = [
-  { handle: "top-left", fx: 0, fy: 0 },
-  { handle: "top", fx: 0.5, fy: 0 },
-  { handle: "top-right", fx: 1, fy: 0 },
-  { handle: "right", fx: 1, fy: 0.5 },
-  { handle: "bottom-right", fx: 1, fy: 1 },
-  { handle: "bottom", fx: 0.5, fy: 1 },
-  { handle: "bottom-left", fx: 0, fy: 1 },
-  { handle: "left", fx: 0, fy: 0.5 },
-];
-
-function ResizeHandles({ placement: pl, view: v, onResize }: { placement: Placement; view: ViewTransform; onResize: Props["onResize"] }) {
-  const a = toScreen(v, pl.x, pl.y + pl.height);
-  const w = pl.width * v.scale;
-  const h = pl.height * v.scale;
-  const [live, setLive] = useState<BoardRect | null>(null);
-  useEffect(() => setLive(null), [pl]);
-  const r = live ? { a: toScreen(v, live.x, live.y + live.height), w: live.width * v.scale, h: live.height * v.scale } : { a, w, h };
-  return (
-    <Group>
-      {live && <Rect x={r.a.x} y={r.a.y} width={r.w} height={r.h} stroke={COPPER} dash={[4, 3]} listening={false} />}
-      {HANDLES.map(({ handle, fx, fy }) => {
-        const hx = a.x + fx * w;
-        const hy = a.y + fy * h;
-        return (
-          <Rect
-            key={handle}
-            name={`handle-${handle}`}
-            x={hx - 4}
-            y={hy - 4}
-            width={8}
-            height={8}
-            fill="#fffdf8"
-            stroke={COPPER}
-            strokeWidth={1.5}
-            draggable
-            onMouseDown={(e) => (e.cancelBubble = true)}
-            onDragMove={(e) => setLive(onResize(pl.id, handle, (e.target.x() + 4 - hx) / v.scale, -(e.target.y() + 4 - hy) / v.scale, false))}
-            onDragEnd={(e) => {
-              onResize(pl.id, handle, (e.target.x() + 4 - hx) / v.scale, -(e.target.y() + 4 - hy) / v.scale, true);
-              e.target.position({ x: hx - 4, y: hy - 4 });
-            }}
-          />
-        );
-      })}
-    </Group>
   );
 }

@@ -49,6 +49,10 @@ export function DrawingPanel({ board, scalePoints, setScalePoints, mode, setMode
     }
   }
 
+  function setOpacity(opacity: number) {
+    if (d && opacity !== d.opacity) void send({ attachmentId: d.attachmentId, x: d.x, y: d.y, metresPerPixel: d.metresPerPixel, opacity });
+  }
+
   function applyScale() {
     if (!d || scalePoints.length < 2) return;
     const [a, b] = scalePoints;
@@ -106,7 +110,18 @@ export function DrawingPanel({ board, scalePoints, setScalePoints, mode, setMode
               <label htmlFor="drawing-opacity" className="font-semibold uppercase tracking-wider text-ink-soft">
                 Opacity {Math.round(d.opacity * 100)} %
               </label>
-              <input id="drawing-opacity" type="range" min={0} max={1} step={0.05} defaultValue={d.opacity} onMouseUp={(e) => send({ attachmentId: d.attachmentId, x: d.x, y: d.y, metresPerPixel: d.metresPerPixel, opacity: Number((e.target as HTMLInputElement).value) })} />
+              <input
+                id="drawing-opacity"
+                type="range"
+                min={0}
+                max={1}
+                step={0.05}
+                defaultValue={d.opacity}
+                // Sent when the pointer lets go or an arrow key is released, not on every step.
+                onMouseUp={(e) => setOpacity(Number(e.currentTarget.value))}
+                onTouchEnd={(e) => setOpacity(Number(e.currentTarget.value))}
+                onKeyUp={(e) => setOpacity(Number(e.currentTarget.value))}
+              />
             </div>
             <div className="flex flex-col gap-2">
               <button type="button" className="rounded-sheet border border-ink/30 px-2 py-1 hover:bg-white" aria-pressed={mode === "scale"} onClick={() => { setScalePoints([]); setMode(mode === "scale" ? "select" : "scale"); }}>

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import type { PinView } from "@/lib/services/boards";
-import { ApiError } from "@/lib/queries/api";
+import { refusalFor } from "./refusal-words";
 import { RoleBadge } from "@/components/ui/role-badge";
 
 type Actions = ReturnType<typeof import("@/lib/queries/boards").usePinActions>;
@@ -23,11 +23,12 @@ export function PinsPanel({ pins, actions, selected, onSelect, may }: { pins: Pi
 
 function PinItem({ pin, open, onToggle, actions, may }: { pin: PinView; open: boolean; onToggle: () => void; actions: Actions; may: { pin: boolean; resolve: boolean } }) {
   const [reply, setReply] = useState("");
-  const err = actions.reply.error instanceof ApiError ? actions.reply.error : null;
+  // The server's own words for a refused reply (an empty one, one too long), under the field.
+  const refused = actions.reply.variables?.pinId === pin.id ? refusalFor(actions.reply.error, "body") : null;
   return (
     <li data-pin={pin.number} className={`rounded-sheet border px-3 py-2 text-xs ${pin.resolved ? "border-ink/15 bg-white/40 text-ink-soft" : "border-copper/50 bg-white/70"}`}>
       <button type="button" className="flex w-full items-start gap-2 text-left" onClick={onToggle}>
-        <span className={`figures inline-flex h-5 w-5 shrink-0 items-center justify-center rounded-full text-[10px] font-semibold ${pin.resolved ? "bg-ink/20 text-ink" : "bg-copper text-paper"}`}>{pin.number}</span>
+        <span className={`figures inline-flex h-5 w-5 shrink-0 items-center justify-center rounded-full text-[10px] font-semibold ${pin.resolved ? "bg-ink/20 text-ink" : "bg-copper-deep text-paper"}`}>{pin.number}</span>
         <span className="min-w-0">
           <span className="block">{pin.body}</span>
           <span className="mt-0.5 block text-[10px] text-ink-faint">
@@ -57,8 +58,20 @@ function PinItem({ pin, open, onToggle, actions, may }: { pin: PinView; open: bo
               <label className="sr-only" htmlFor={`reply-${pin.id}`}>
                 Reply to pin {pin.number}
               </label>
-              <textarea id={`reply-${pin.id}`} value={reply} onChange={(e) => setReply(e.target.value)} rows={2} className="rounded-sheet border border-paper-edge bg-white/80 px-2 py-1" />
-              {err?.fieldMessage("body") && <p className="text-fault">{err.fieldMessage("body")}</p>}
+              <textarea
+                id={`reply-${pin.id}`}
+                value={reply}
+                onChange={(e) => setReply(e.target.value)}
+                rows={2}
+                aria-invalid={refused ? true : undefined}
+                aria-describedby={refused ? `reply-${pin.id}-error` : undefined}
+                className={`rounded-sheet border bg-white/80 px-2 py-1 ${refused ? "border-fault" : "border-paper-edge"}`}
+              />
+              {refused && (
+                <p id={`reply-${pin.id}-error`} role="alert" className="font-medium text-fault">
+                  {refused}
+                </p>
+              )}
               <div className="flex gap-3">
                 <button type="submit" className="font-semibold text-copper-deep hover:underline">
                   Reply

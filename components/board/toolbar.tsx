@@ -16,6 +16,8 @@ type Props = {
   onAdd: () => void;
   onArray: (spec: { columns: number; rows: number; gapX: number; gapY: number }) => void;
   gridModule: number;
+  /** the server's refusal of the grid module */
+  gridError?: string;
   setGridModule: (m: number) => void;
   units: UnitPreference;
   canUndo: boolean;
@@ -26,9 +28,16 @@ type Props = {
   onZoom: (factor: number) => void;
 };
 
-function ModeButton({ active, onClick, children, testId }: { active: boolean; onClick: () => void; children: React.ReactNode; testId?: string }) {
+function ModeButton({ active, onClick, children, testId, disabled }: { active?: boolean; onClick: () => void; children: React.ReactNode; testId?: string; disabled?: boolean }) {
   return (
-    <button type="button" data-testid={testId} aria-pressed={active} onClick={onClick} className={`rounded-sheet border px-2 py-1.5 text-xs ${active ? "border-copper bg-copper-soft/50 font-semibold" : "border-ink/25 bg-white/60 hover:bg-white"}`}>
+    <button
+      type="button"
+      data-testid={testId}
+      aria-pressed={active}
+      onClick={onClick}
+      disabled={disabled}
+      className={`rounded-sheet border px-2 py-1.5 text-xs disabled:cursor-default disabled:opacity-50 ${active ? "border-copper bg-copper-soft/50 font-semibold" : "border-ink/25 bg-white/60 enabled:hover:bg-white"}`}
+    >
       {children}
     </button>
   );
@@ -87,25 +96,25 @@ export function Toolbar(p: Props) {
         </div>
       )}
       <div className="flex flex-col gap-2 border-t border-ink/15 pt-3">
-        <MeasureField label="Grid module" metres={p.gridModule} units={p.units} onChange={p.setGridModule} />
+        <MeasureField label="Grid module" metres={p.gridModule} units={p.units} onChange={p.setGridModule} error={p.gridError} />
         <div className="grid grid-cols-3 gap-1">
-          <ModeButton active={false} onClick={() => p.onZoom(1.25)}>
+          <ModeButton onClick={() => p.onZoom(1.25)}>
             Zoom +
           </ModeButton>
-          <ModeButton active={false} onClick={() => p.onZoom(0.8)}>
+          <ModeButton onClick={() => p.onZoom(0.8)}>
             Zoom −
           </ModeButton>
-          <ModeButton active={false} onClick={p.onFit}>
+          <ModeButton onClick={p.onFit}>
             Fit
           </ModeButton>
         </div>
         {p.may.edit && (
           <div className="grid grid-cols-2 gap-1">
-            <ModeButton active={false} onClick={p.onUndo}>
-              <span className={p.canUndo ? "" : "opacity-40"}>Undo</span>
+            <ModeButton onClick={p.onUndo} disabled={!p.canUndo}>
+              Undo
             </ModeButton>
-            <ModeButton active={false} onClick={p.onRedo}>
-              <span className={p.canRedo ? "" : "opacity-40"}>Redo</span>
+            <ModeButton onClick={p.onRedo} disabled={!p.canRedo}>
+              Redo
             </ModeButton>
           </div>
         )}

@@ -1,76 +1,54 @@
 "use client";
 
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { Placement } from "@/lib/board/types";
 import type { BoardView } from "@/lib/services/boards";
+import { createAutosave, type AutosaveSnapshot, type Outcome } from "@/lib/board/autosave";
+import { boardIssues, type BoardIssue } from "@/lib/board/refusal";
 import { putBoard } from "@/lib/queries/boards";
 import { ApiError } from "@/lib/queries/api";
 
-export type SaveState = "saved" | "pending" | "saving" | "conflict" | "error";
+type Doc = { placements: readonly Placement[]; gridModule: number };
 
-// Every change is saved after a short pause, naming the version it started from. A refusal
-// with 409 stops saving and asks the person to reload; nothing is written over.
+const classify = (e: unknown): Outcome => (e instanceof ApiError && e.status === 409 ? "conflict" : e instanceof ApiError && e.status >= 400 && e.status < 500 ? "refused" : "retry");
+
+// The board's autosave (lib/board/autosave.ts) with the server's answer in words: a refusal
+// is read back onto the panels and fields it names.
 export function useBoardSave(board: Pick<BoardView, "projectId" | "roomId" | "surfaceKey">, initialVersion: number, enabled: boolean) {
-  const [version, setVersion] = useState(initialVersion);
-  const [state, setState] = useState<SaveState>("saved");
-  const [message, setMessage] = useState<string | null>(null);
-  const pending = useRef<{ placements: readonly Placement[]; gridModule: number } | null>(null);
-  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
-  const inFlight = useRef(false);
-  const versionRef = useRef(initialVersion);
-  const blocked = useRef(false);
-
-  const flush = useCallback(async () => {
-    if (inFlight.current || !pending.current || blocked.current) return;
-    const doc = pending.current;
-    pending.current = null;
-    inFlight.current = true;
-    setState("saving");
-    try {
-      const saved = await putBoard(board, {
-        version: versionRef.current,
-        gridModule: doc.gridModule,
-        placements: doc.placements.map((p) => ({ id: p.id, buildUpId: p.buildUpId, code: p.code ?? p.id.slice(0, 8), x: p.x, y: p.y, width: p.width, height: p.height })),
-      });
-      versionRef.current = saved.version;
-      setVersion(saved.version);
-      setState(pending.current ? "pending" : "saved");
-      setMessage(null);
-    } catch (e) {
-      if (e instanceof ApiError && e.status === 409) {
-        blocked.current = true;
-        setState("conflict");
-      } else {
-        setState("error");
-        pending.current ??= doc;
-      }
-      setMessage(e instanceof ApiError ? e.message : "The board could not be saved. Your changes are kept on this screen; they will be sent again.");
-    } finally {
-      inFlight.current = false;
-      if (pending.current && !blocked.current) timer.current = setTimeout(flush, 400);
-    }
-  }, [board]);
-
-  const schedule = useCallback(
-    (placements: readonly Placement[], gridModule: number) => {
-      if (!enabled || blocked.current) return;
-      pending.current = { placements, gridModule };
-      setState("pending");
-      if (timer.current) clearTimeout(timer.current);
-      timer.current = setTimeout(flush, 600);
-    },
-    [enabled, flush],
+  const [snap, setSnap] = useState<AutosaveSnapshot<Doc>>({ state: "saved", version: initialVersion, error: null, refused: null });
+  const where = useRef(board);
+  const saver = useMemo(
+    () =>
+      createAutosave<Doc>({
+        version: initialVersion,
+        classify,
+        onChange: setSnap,
+        send: (doc, version) =>
+          putBoard(where.current, {
+            version,
+            gridModule: doc.gridModule,
+            placements: doc.placements.map((p) => ({ id: p.id, buildUpId: p.buildUpId, code: p.code ?? p.id.slice(0, 8), x: p.x, y: p.y, width: p.width, height: p.height })),
+          }),
+      }),
+    [], // eslint-disable-line react-hooks/exhaustive-deps -- one saver for the screen's life
   );
+  useEffect(() => () => saver.dispose(), [saver]);
 
-  const reset = useCallback((v: number) => {
-    blocked.current = false;
-    pending.current = null;
-    versionRef.current = v;
-    setVersion(v);
-    setState("saved");
-    setMessage(null);
-  }, []);
-
-  useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
-  return { version, state, message, schedule, reset };
+  const error = snap.error;
+  const message =
+    error instanceof ApiError
+      ? error.message
+      : error
+        ? "The board could not be saved (the server did not answer). Your changes are kept on this screen and will be sent again."
+        : null;
+  const issues: BoardIssue[] = useMemo(
+    () => (error instanceof ApiError && snap.refused ? boardIssues(error.issues, { placements: snap.refused.placements }) : []),
+    [error, snap.refused],
+  );
+  // Stable functions: the board's memoised panels take callbacks that use them.
+  const schedule = useCallback((placements: readonly Placement[], gridModule: number) => void (enabled && saver.schedule({ placements, gridModule })), [enabled, saver]);
+  const reset = useCallback((v: number) => saver.reset(v), [saver]);
+  /** why the last send failed, while it stands: refused by the server, or not answered (sent again) */
+  const failure = error === null || snap.state === "conflict" ? null : classify(error) === "refused" ? ("refused" as const) : ("retrying" as const);
+  return { version: snap.version, state: snap.state, message, issues, failure, schedule, reset };
 }

@@ -36,7 +36,7 @@ export function AbsorptionChart({ curves, markers = [], height = 300 }: { curves
           </text>
         </g>
       ))}
-      <text x={width - pad.right} y={height - 4} textAnchor="end" fontSize="10" fill="#7c8598">
+      <text x={width - pad.right} y={height - 4} textAnchor="end" fontSize="10" fill="#566075">
         Hz
       </text>
       <text x={pad.left - 8} y={pad.top - 6} textAnchor="end" fontSize="12" fill="#44506a">

@@ -30,7 +30,7 @@ export function ReverbChart({ points, treated, height = 280 }: { points: ReverbP
           {l.text}
         </text>
       ))}
-      <text x={width - pad.right} y={height - 4} textAnchor="end" fontSize="10" fill="#7c8598">
+      <text x={width - pad.right} y={height - 4} textAnchor="end" fontSize="10" fill="#566075">
         Hz
       </text>
       <polyline points={before} fill="none" stroke="#44506a" strokeWidth="1.6" strokeDasharray="5 4" data-curve="before" />

@@ -75,7 +75,7 @@ export function runDragBenchmark(options: { count?: number; frames?: number; cle
     list = updatePlacement(list, dragged.id, { x: snapped.x, y: snapped.y });
     breaks = checkRules(surface, list, { clearance: options.clearance ?? 0.05 }).length;
     const afterRules = performance.now();
-    treatedArea([{ surfaceKey: "wall-a", placements: list }]);
+    treatedArea([{ surfaceKey: "wall-a", surface, placements: list }]);
     const end = performance.now();
     spent.snap += afterSnap - start;
     spent.rules += afterRules - afterSnap;

@@ -81,6 +81,44 @@ export function cycleSelection(placements: readonly Placement[], current: string
   return order[(at + direction + order.length) % order.length].id;
 }
 
+/**
+ * Tab on the board: the next panel in reading order, or null past the last (Shift+Tab: before
+ * the first), so the key then leaves the board for the rest of the page as Tab always does.
+ */
+export function stepSelection(placements: readonly Placement[], current: string | null, direction: 1 | -1): string | null {
+  if (placements.length === 0) return null;
+  const order = readingOrder(placements);
+  const at = current === null ? -1 : order.findIndex((p) => p.id === current);
+  if (at < 0) return (direction === 1 ? order[0] : order[order.length - 1]).id;
+  return order[at + direction]?.id ?? null;
+}
+
+/**
+ * Alt+arrow: the selected panels grow or shrink from their lower-left corner, which stays put
+ * (ArrowRight wider, ArrowLeft narrower, ArrowUp taller, ArrowDown lower), never below `minSize`.
+ */
+export function resizeByKey(
+  placements: readonly Placement[],
+  selection: ReadonlySet<string>,
+  key: string,
+  shift: boolean,
+  steps: NudgeSteps,
+  minSize: number,
+): readonly Placement[] {
+  const offset = nudgeOffset(key, shift, steps);
+  if (!offset || selection.size === 0) return placements;
+  let changed = false;
+  const next = placements.map((p) => {
+    if (!selection.has(p.id)) return p;
+    const width = Math.max(minSize, p.width + offset.x);
+    const height = Math.max(minSize, p.height + offset.y);
+    if (width === p.width && height === p.height) return p;
+    changed = true;
+    return { ...p, width, height };
+  });
+  return changed ? next : placements;
+}
+
 export function readingOrder(placements: readonly Placement[]): Placement[] {
   const row = (p: Placement) => Math.round((p.y + p.height / 2) * 1000);
   return [...placements].sort((a, b) => row(b) - row(a) || a.x - b.x);

@@ -78,3 +78,13 @@ export function fitToView(surface: Size, viewport: Size, margin: number, limits:
     offsetY: (viewport.height + surface.height * scale) / 2,
   };
 }
+
+/**
+ * How tall the board's canvas should be to show the whole surface across `width` px with
+ * `margin` px round it, within [min, max]: a long wall gets a short canvas, a tall one all
+ * the height the window has.
+ */
+export function canvasHeightFor(surface: Size, width: number, limits: { min: number; max: number; margin: number }): number {
+  const drawn = (Math.max(1, width - 2 * limits.margin) * surface.height) / Math.max(1e-9, surface.width) + 2 * limits.margin;
+  return Math.round(Math.min(Math.max(limits.min, limits.max), Math.max(limits.min, drawn)));
+}

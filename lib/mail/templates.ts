@@ -9,7 +9,7 @@ function layout(title: string, paragraphs: string[], link: { href: string; label
   return `<div style="font-family:sans-serif;color:#1a2740;background:#f6f2e9;padding:24px">
 <h1 style="font-size:18px;margin:0 0 16px">${escape(title)}</h1>${body}
 <p><a href="${escape(link.href)}" style="color:#8a4520">${escape(link.label)}</a></p>
-<p style="font-size:12px;color:#7c8598">Cavitas. If you did not expect this message, you can ignore it.</p></div>`;
+<p style="font-size:12px;color:#566075">Cavitas. If you did not expect this message, you can ignore it.</p></div>`;
 }
 
 export function projectInvitationMail(p: {

@@ -280,21 +280,22 @@ export function openPinCounts(projectId: string): Map<string, number> {
   return counts;
 }
 
-// Placed panel area per surface key and build-up, for the room's check.
-export function placedAreas(roomId: string): { surfaceKey: string; buildUpId: string; area: number }[] {
+// The panels placed on a room's boards, per surface key, for the room's check (which counts
+// only the part of them that can exist: lib/board/treated-area.ts).
+export function placedPanels(roomId: string): { surfaceKey: string; placements: Pick<BoardPlacement, "buildUpId" | "x" | "y" | "width" | "height">[] }[] {
   const rows = getDb()
-    .select({ key: surface.key, buildUpId: placement.buildUpId, width: placement.width, height: placement.height })
+    .select({ key: surface.key, buildUpId: placement.buildUpId, x: placement.x, y: placement.y, width: placement.width, height: placement.height })
     .from(placement)
     .innerJoin(board, eq(board.id, placement.boardId))
     .innerJoin(surface, eq(surface.id, board.surfaceId))
     .where(eq(surface.roomId, roomId))
+    .orderBy(asc(placement.position))
     .all();
-  const sums = new Map<string, { surfaceKey: string; buildUpId: string; area: number }>();
-  for (const r of rows) {
-    const k = `${r.key}|${r.buildUpId}`;
-    const line = sums.get(k) ?? { surfaceKey: r.key, buildUpId: r.buildUpId, area: 0 };
-    line.area += r.width * r.height;
-    sums.set(k, line);
+  const boards = new Map<string, { surfaceKey: string; placements: Pick<BoardPlacement, "buildUpId" | "x" | "y" | "width" | "height">[] }>();
+  for (const { key, ...p } of rows) {
+    const b = boards.get(key) ?? { surfaceKey: key, placements: [] };
+    b.placements.push(p);
+    boards.set(key, b);
   }
-  return [...sums.values()];
+  return [...boards.values()];
 }

@@ -13,7 +13,8 @@ import type { Actor } from "./actor";
 import { authorize } from "./guard";
 import { recordAudit } from "./audit";
 import { materialLookup } from "./materials";
-import { openPinCounts, placedAreas } from "./boards";
+import { openPinCounts, placedPanels } from "./boards";
+import { treatedArea } from "@/lib/board/treated-area";
 import { fieldsFromRows, geometryOf, panelAlphaOf, roomIssues, runCheck, surfacesFor, type PanelAlpha } from "@/lib/room-model";
 
 export type RoomView = Omit<RoomFields, "surfaces"> & {
@@ -27,7 +28,7 @@ export type RoomView = Omit<RoomFields, "surfaces"> & {
   targetResolved: Target | null;
   check: CheckResult;
   warnings: Issue[];
-  /** panel area placed on the elevation boards, per surface and build-up */
+  /** panel area on the elevation boards that counts (inside the surface, net of openings, overlaps once), per surface and build-up */
   placed: { surfaceKey: string; buildUpId: string; area: number }[];
   openPins: number;
 };
@@ -72,7 +73,8 @@ function view(
   lookup = materialLookup(row.projectId),
 ): RoomView {
   const surfaces = surfacesFor(fields);
-  const placed = placedAreas(row.id);
+  const bySurface = new Map(surfaces.map((s) => [s.key, s]));
+  const placed = treatedArea(placedPanels(row.id).flatMap((b) => (bySurface.has(b.surfaceKey) ? [{ ...b, surface: bySurface.get(b.surfaceKey)! }] : [])));
   // The check counts both: treatment entered by area, and panels placed on the boards.
   const { check, target, issues } = runCheck({ fields, surfaces, treatments: [...fields.treatments, ...placed], panels, lookup });
   return {

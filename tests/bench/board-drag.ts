@@ -2,7 +2,6 @@ import crypto from "node:crypto";
 import Database from "better-sqlite3";
 import { startTestServer } from "../e2e/support/server";
 import { newBrowserContext } from "../e2e/support/browser";
-import { fitToView } from "@/lib/board/view";
 import { runDragBenchmark } from "@/lib/board/drag-benchmark";
 
 // Board benchmark in Chromium: drag one panel across a board of 500 placements and report the
@@ -67,13 +66,14 @@ async function main() {
       await canvas.locator("canvas").first().waitFor();
       await page.waitForTimeout(800);
       const box = (await canvas.boundingBox())!;
-      const board = (await (await page.request.get(`${server.baseUrl}/api/v1${projectId}/rooms/${roomId}/boards/${c.key}`)).json()) as { placements: { x: number; y: number; width: number; height: number }[] };
-      const surface = { width: 0, height: 0 };
-      const room = (await (await page.request.get(`${server.baseUrl}/api/v1${projectId}/rooms/${roomId}`)).json()) as { surfaces: { key: string; width: number; height: number }[] };
-      Object.assign(surface, room.surfaces.find((s) => s.key === c.key));
-      const view = fitToView(surface, { width: box.width, height: box.height }, 48);
-      const first = board.placements[0];
-      const start = { x: box.x + view.offsetX + (first.x + first.width / 2) * view.scale, y: box.y + view.offsetY - (first.y + first.height / 2) * view.scale };
+      // The first panel's middle, from the canvas's own drawing (the view fits the surface to
+      // whatever size the canvas has).
+      const start = (await page.evaluate(`(() => {
+        const stage = window.Konva.stages[0];
+        const r = stage.find(".panel")[0].getClientRect();
+        const b = stage.container().getBoundingClientRect();
+        return { x: b.x + r.x + r.width / 2, y: b.y + r.y + r.height / 2 };
+      })()`)) as { x: number; y: number };
       // A string, not a function: tsx would add helpers the page does not have.
       await page.evaluate(`(() => {
         window.__frames = 0;

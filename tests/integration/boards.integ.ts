@@ -88,6 +88,34 @@ describe("saving a board", () => {
   });
 });
 
+describe("what the room's check counts of a board", () => {
+  it("counts only what can exist: overlaps once, nothing over the door", async () => {
+    const { createRoom } = await import("@/lib/services/rooms");
+    const { actorFromHeaders } = await import("@/lib/auth/session");
+    const door = { kind: "door" as const, name: "Door", x: 2, y: 0, width: 1, height: 2.1, material: "timber-door" };
+    const studio = createRoom(await actorFromHeaders(new Headers({ cookie: cookie.consultant })), projectId, {
+      name: "Studio",
+      use: "speech",
+      shape: "shoebox",
+      length: 10,
+      width: 6,
+      height: 3,
+      surfaces: [{ key: "wall-a", name: "Wall A", kind: "wall", width: 10, height: 3, finish: "plaster-on-masonry", openings: [door] }],
+    }).id;
+    const boardParams = { projectId, roomId: studio, surfaceKey: "wall-a" };
+    // 0.6 × 1.2 panels: P-000 at x = 0.1 and P-001 at x = 0.4 share 0.3 × 1.2 = 0.36 m² (one
+    // layer counts: 0.9 × 1.2 = 1.08 m²); P-002 at x = 1.7, y = 0.5 reaches x = 2.3, so 0.3 ×
+    // 1.2 = 0.36 m² of it lies over the door (x 2–3, up to 2.1 m): 0.36 m² of it counts.
+    // Counted: 1.08 + 0.36 = 1.44 m² of the 2.16 m² placed.
+    const placements = [panel(0, { id: "s-0" }), panel(1, { id: "s-1", x: 0.4 }), panel(2, { id: "s-2", x: 1.7 })];
+    const saved = await call((await boardRoute()).PUT, { method: "PUT", cookie: cookie.consultant, params: boardParams, body: { version: 0, placements } });
+    expect(saved.status).toBe(200);
+    const after = await call((await roomRoute()).GET, { cookie: cookie.consultant, params: { projectId, roomId: studio } });
+    expect(after.json.placed).toEqual([{ surfaceKey: "wall-a", buildUpId, area: expect.closeTo(1.44, 9) }]);
+    expect(after.json.check.ok).toBe(true);
+  });
+});
+
 describe("the project's edge clearance", () => {
   it("is set by the consultant, reaches every board, and refuses a length out of range", async () => {
     const projectRoute = await import("@/app/api/v1/projects/[projectId]/route");
