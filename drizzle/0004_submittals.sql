@@ -29,6 +29,7 @@ CREATE TABLE `submittal` (
 	`issued_by` text,
 	`confirmed` text,
 	`render_error` text,
+	`outcome` text,
 	`decided_at` integer,
 	`decided_by` text,
 	`signature` text,

@@ -8,7 +8,8 @@ export type ErrorCode =
   | "gone"
   | "invalid"
   | "too_many"
-  | "bad_request";
+  | "bad_request"
+  | "failed";
 
 export type FieldIssue = { field: string; message: string };
 
@@ -32,6 +33,9 @@ export const gone = (message: string) => new AppError("gone", message);
 export const invalid = (issues: FieldIssue[], message = "Some fields need attention.") =>
   new AppError("invalid", message, issues);
 
+/** work on our side failed (a document that would not render); the message says what was kept */
+export const failed = (message: string) => new AppError("failed", message);
+
 /** a limit was reached; the message says how long to wait */
 export const tooMany = (message: string) => new AppError("too_many", message);
 
@@ -44,4 +48,5 @@ export const STATUS: Record<ErrorCode, number> = {
   invalid: 422,
   too_many: 429,
   bad_request: 400,
+  failed: 500,
 };

@@ -31,6 +31,8 @@ export const submittal = sqliteTable(
     confirmed: text("confirmed"),
     // Why the last attempt to issue this draft failed, shown until an issue succeeds.
     renderError: text("render_error"),
+    // The client's decision, kept when a later revision supersedes this one.
+    outcome: text("outcome", { enum: ["approved", "approved-as-noted", "returned"] }),
     decidedAt: integer("decided_at", { mode: "timestamp_ms" }),
     decidedBy: text("decided_by").references(() => user.id, { onDelete: "set null" }),
     // The full name the client typed as signature, their notes, and the SHA-256 of the PDF decided on.
