@@ -29,7 +29,7 @@ export function SelectionPanel({ selected, units, editable, buildUps, issues, hi
       <div className="text-xs" data-testid="selection-many">
         <p className="font-medium">{selected.length} panels</p>
         <p className="figures mt-1 text-ink-soft">
-          from {formatLength(b.x, units)}, {formatLength(b.y, units)}; {formatLength(b.width, units)} × {formatLength(b.height, units)} overall; {formatArea(area, units)}
+          from {formatLength(b.x, units, { scale: "panel" })}, {formatLength(b.y, units, { scale: "panel" })}; {formatLength(b.width, units, { scale: "panel" })} × {formatLength(b.height, units, { scale: "panel" })} overall; {formatArea(area, units)}
         </p>
         {editable && (
           <button type="button" className="mt-2 text-fault hover:underline" onClick={onDelete}>

@@ -16,7 +16,7 @@ export function selectionAnnouncement(selected: readonly Placement[], units: Uni
   if (selected.length === 0) return "No panel selected.";
   if (selected.length > 1) return `${selected.length} panels selected.`;
   const p = selected[0];
-  const len = (m: number) => formatLength(m, units);
+  const len = (m: number) => formatLength(m, units, { scale: "panel" });
   return `${p.code ?? "Panel"} selected: ${len(p.width)} wide, ${len(p.height)} high, ${len(p.x)} from the left, ${len(p.y)} above the datum.`;
 }
 
@@ -52,7 +52,7 @@ export function checkAnnouncement(check: CheckResult | null, account: AreaAccoun
 
 /** The surface in words, for the canvas's description: its size and where its openings are. */
 export function surfaceDescription(name: string, surface: BoardSurface, units: UnitPreference): string {
-  const len = (m: number) => formatLength(m, units);
+  const len = (m: number) => formatLength(m, units, { scale: "panel" });
   const openings = surface.openings.map(
     (o) => `${o.name || o.kind}, ${len(o.width)} wide and ${len(o.height)} high, ${len(o.x)} from the left and ${len(o.y)} above the datum`,
   );

@@ -131,8 +131,10 @@ export function buildSnapshot(source: SnapshotSource): SubmittalSnapshot {
     height: p.height,
   }));
 
-  // Only what can exist counts, as on the Board: inside the surface, net of openings, overlaps once.
-  const placed = treatedArea(surfaces.map((surface) => ({ surfaceKey: surface.key, surface, placements: placements.filter((p) => p.surfaceKey === surface.key) })));
+  // The check counts what can exist (inside the surface, net of openings, overlaps once), as
+  // the room screen and the server's saved check do.
+  const shapeOf = new Map(surfaces.map((s) => [s.key, s]));
+  const placed = treatedArea(surfaceOrder.map((key) => ({ surfaceKey: key, surface: shapeOf.get(key)!, placements: placements.filter((p) => p.surfaceKey === key) })));
   const panels = new Map<string, PanelAlpha>(buildUps.map((b) => [b.id, { name: b.name, alpha: octaveAlphaFromBands(results.get(b.id)!.octaves) }]));
   const lookup = (key: string) => source.materials(key)?.alpha;
   const { check, target, issues } = runCheck({ fields, surfaces, treatments: [...fields.treatments, ...placed], panels, lookup });

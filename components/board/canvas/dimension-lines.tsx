@@ -14,7 +14,7 @@ const TICK = 4;
 const CHAR = 6.3;
 
 /** Metric drawings dimension in millimetres throughout; imperial ones in feet and inches. */
-export const dimensionText = (metres: number, units: UnitPreference) => formatLength(metres, units, { small: units === "metric" });
+export const dimensionText = (metres: number, units: UnitPreference) => formatLength(metres, units, { scale: "panel" });
 
 type Label = "inside" | "lifted" | "after";
 
