@@ -62,7 +62,7 @@ async function renderDecision(snapshot: SubmittalSnapshot, pdfSha256: string, de
     if (decision.outcome !== "returned") {
       for (const u of ["metric", "imperial"] as const) {
         const pack = await buildShopPack({ snapshot, submittalPdfHash: pdfSha256, approval: decision, units: u });
-        docs.push(writeDocument({ kind: "shop-pack", units: u, name: pack.name, bytes: pack.zip }));
+        docs.push(writeDocument({ kind: "shop-pack", units: u, name: pack.name.replace(/\.zip$/, `_${u}.zip`), bytes: pack.zip }));
       }
     }
     return docs;

@@ -25,8 +25,6 @@ function words(action: string, d: Detail): string | null {
       return `${OUTCOMES[String(d.outcome)] ?? "Decided"}, signed "${String(d.signature)}", on the PDF with SHA-256 ${String(d.pdfSha256)}.`;
     case "shop-pack.downloaded":
       return `Shop pack downloaded (${String(d.units)}), SHA-256 ${String(d.sha256)}.`;
-    case "installation.marked":
-      return `${String(d.code)} marked installed.`;
     case "installation.unmarked":
       return `${String(d.code)} marked not installed.`;
     case "installation.photo":
@@ -36,15 +34,37 @@ function words(action: string, d: Detail): string | null {
   }
 }
 
+const MARKS_NAMED = 12;
+
+/** Panels marked installed one after another by one person read as one line. */
+function groupMarks(events: { at: string; who: string | null; action: string; detail: Detail }[]): HistoryLine[] {
+  const lines: (HistoryLine & { codes?: string[] })[] = [];
+  for (const e of events) {
+    const last = lines.at(-1);
+    if (e.action === "installation.marked") {
+      if (last?.codes && last.who === e.who) {
+        last.codes.push(String(e.detail.code));
+        last.at = e.at;
+      } else lines.push({ at: e.at, who: e.who, what: "", codes: [String(e.detail.code)] });
+      continue;
+    }
+    const what = words(e.action, e.detail);
+    if (what) lines.push({ at: e.at, who: e.who, what });
+  }
+  return lines.map(({ codes, ...line }) => {
+    if (!codes) return line;
+    const more = codes.length > MARKS_NAMED ? ` and ${codes.length - MARKS_NAMED} more` : "";
+    return { ...line, what: `${codes.slice(0, MARKS_NAMED).join(", ")}${more} marked installed.` };
+  });
+}
+
 export function historyOf(row: Submittal, people: Map<string, string>): HistoryLine[] {
-  return getDb()
+  const events = getDb()
     .select()
     .from(auditEvent)
     .where(eq(auditEvent.subjectId, row.id))
     .orderBy(asc(auditEvent.createdAt))
     .all()
-    .flatMap((e) => {
-      const what = words(e.action, e.detail ? (JSON.parse(e.detail) as Detail) : {});
-      return what ? [{ at: e.createdAt.toISOString(), who: e.actorId ? (people.get(e.actorId) ?? "A former member") : null, what }] : [];
-    });
+    .map((e) => ({ at: e.createdAt.toISOString(), who: e.actorId ? (people.get(e.actorId) ?? "A former member") : null, action: e.action, detail: e.detail ? (JSON.parse(e.detail) as Detail) : {} }));
+  return groupMarks(events);
 }

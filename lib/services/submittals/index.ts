@@ -10,5 +10,5 @@ export { decideSubmittal, nameToSign, signatureForm } from "./decide";
 export { readDecisionRecord, readShopPack, readSubmittalPdf } from "./documents";
 export { issueReadiness, issueSubmittal, type IssueReadiness } from "./issue";
 export { attachSitePhoto, installedOnRoom, projectProgress, setInstalled, type InstalledPanel, type ProjectProgress, type RoomProgress } from "./install";
-export { getSubmittal, listSubmittals, type DocumentLink, type RevisionSummary, type SubmittalList, type SubmittalView } from "./views";
+export { getShopPack, getSubmittal, listShopPacks, listSubmittals, type DocumentLink, type RevisionSummary, type ShopPackEntry, type SubmittalList, type SubmittalView } from "./views";
 export type { HistoryLine } from "./history";

@@ -8,7 +8,8 @@ import { readSnapshot, type ReadinessItem, type SnapshotPlacement, type Snapshot
 import type { UnitPreference } from "@/lib/units";
 import type { Actor } from "../actor";
 import { authorize } from "../guard";
-import { isApproved, mayOpen, openRevision } from "./access";
+import { isApproved, mayOpen, openRevision, revisionName, STATE_WORDS } from "./access";
+import { conflict } from "@/lib/errors";
 import { nameToSign } from "./decide";
 import { documentsOf } from "./files";
 import { historyOf, type HistoryLine } from "./history";
@@ -160,4 +161,39 @@ export function getSubmittal(actor: Actor | null, projectId: string, submittalId
     signAs: nameToSign(access.actor.name),
     install: snapshot && installed ? { surfaces: snapshot.surfaces.filter((s) => snapshot.placements.some((p) => p.surfaceKey === s.key)), placements: snapshot.placements.map((p) => ({ ...p, ...installed.get(p.id)! })) } : null,
   };
+}
+
+export type ShopPackEntry = { id: string; roomName: string; letter: string; state: Submittal["state"]; decidedAt: string | null; decidedBy: string | null; notes: string; packs: DocumentLink[]; panels: number; installed: number };
+
+/** The shop packs of the approved revisions in force, for those who build or issue. */
+export function listShopPacks(actor: Actor | null, projectId: string): { entries: ShopPackEntry[]; units: UnitPreference } {
+  const access = authorize(actor, projectId, "shop.download");
+  const people = peopleNames();
+  const progress = progressOf(projectId);
+  const rows = getDb().select().from(submittal).where(eq(submittal.projectId, projectId)).all().filter((r) => isApproved(r.state));
+  const entries = rows
+    .map((r): ShopPackEntry => {
+      const p = progress.rooms.find((x) => x.submittalId === r.id);
+      return {
+        id: r.id,
+        roomName: r.roomName,
+        letter: r.letter,
+        state: r.state,
+        decidedAt: r.decidedAt?.toISOString() ?? null,
+        decidedBy: r.decidedBy ? (people.get(r.decidedBy) ?? null) : null,
+        notes: r.notes ?? "",
+        packs: documentsOf(r.id).filter((d) => d.kind === "shop-pack").map((d) => link(projectId, d)),
+        panels: p?.panels ?? 0,
+        installed: p?.installed ?? 0,
+      };
+    })
+    .sort((a, b) => a.roomName.localeCompare(b.roomName));
+  return { entries, units: access.actor.unitPreference };
+}
+
+/** One approved revision in force as the Shop pack screen shows it; any other state is refused, naming it. */
+export function getShopPack(actor: Actor | null, projectId: string, submittalId: string): SubmittalView {
+  const { row } = openRevision(actor, projectId, submittalId, "shop.download");
+  if (!isApproved(row.state)) throw conflict(`${revisionName(row)} is ${STATE_WORDS[row.state]}; a shop pack is made only from an approved revision in force.`, "state");
+  return getSubmittal(actor, projectId, submittalId);
 }

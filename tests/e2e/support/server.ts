@@ -60,8 +60,9 @@ export async function startTestServer(opts: { beforeStart?: (databasePath: strin
     CAVITAS_SMTP_PORT: String(mail.smtpPort),
     CAVITAS_MAIL_HTTP_PORT: String(mail.httpPort),
   };
-  // Migrate and seed the demo scenario into the temporary database, as `npm run demo` does.
-  const seeded = spawnSync(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "lib/cli/seed.ts"], { env, stdio: "inherit" });
+  // Migrate and seed the demo scenario into the temporary database, as `npm run demo` does
+  // (the PDF renderer's hyphenation package exports ESM only, hence the import condition).
+  const seeded = spawnSync(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "--conditions=import", "lib/cli/seed.ts"], { env, stdio: "inherit" });
   if (seeded.status !== 0) throw new Error("seeding the e2e database failed");
   await opts.beforeStart?.(databasePath);
   const child = spawn(process.execPath, [nextBin(root), "start", "-p", String(port)], { env, stdio: ["ignore", "inherit", "inherit"] });
