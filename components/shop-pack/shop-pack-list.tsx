@@ -28,7 +28,7 @@ export function ShopPackList({ projectId, entries, units }: { projectId: string;
               <div className="mt-4 flex flex-wrap items-center justify-between gap-3 border-t border-ink/15 pt-3 text-sm">
                 <span className="figures">{`${e.installed} of ${e.panels} panels installed`}</span>
                 <Link href={`/projects/${projectId}/shop-pack/${e.id}`} className="font-semibold text-copper-deep underline-offset-4 hover:underline">
-                  Panels and progress<span className="sr-only">: {e.roomName}</span>
+                  Panels and progress<span className="sr-only"> of {e.roomName}</span>
                 </Link>
               </div>
             </Sheet>

@@ -63,7 +63,7 @@ async function submittalScreens(s: Session, role: string, shopPack: boolean) {
   await s.page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Shop pack" }).click();
   await s.page.getByTestId("shop-packs").waitFor();
   await check(s, "Shop pack", role);
-  await s.page.getByRole("link", { name: "Panels and progress: Lecture room" }).click();
+  await s.page.getByRole("link", { name: "Panels and progress of Lecture room" }).click();
   await s.page.getByTestId("install-count").waitFor();
   await check(s, "Shop pack: panels and progress", role);
 }
