@@ -8,6 +8,8 @@ const envSchema = z.object({
   CAVITAS_DATA_DIR: z.string().min(1).default(".data"),
   CAVITAS_DATABASE: z.string().min(1).optional(),
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  // The address `npm run demo` and `npm run dev` listen on: loopback only unless widened.
+  CAVITAS_HOST: z.string().min(1).default("127.0.0.1"),
   CAVITAS_APP_URL: z.url().optional(),
   CAVITAS_SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   CAVITAS_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
@@ -15,10 +17,14 @@ const envSchema = z.object({
   CAVITAS_MAIL_FROM: z.string().min(3).default("Cavitas <noreply@cavitas.example.test>"),
   CAVITAS_UPLOAD_LIMIT_MB: z.coerce.number().positive().default(20),
   BETTER_AUTH_SECRET: z.string().min(32).optional(),
+  CAVITAS_LOG_LEVEL: z.enum(["debug", "info", "warn", "error", "silent"]).default("info"),
 });
+
+export type LogLevel = z.infer<typeof envSchema>["CAVITAS_LOG_LEVEL"];
 
 export type Env = {
   port: number;
+  host: string;
   dataDir: string;
   databasePath: string;
   appUrl: string;
@@ -28,6 +34,7 @@ export type Env = {
   mailFrom: string;
   uploadLimitBytes: number;
   authSecret: string;
+  logLevel: LogLevel;
 };
 
 let cached: Env | null = null;
@@ -46,6 +53,7 @@ export function env(): Env {
     dataDir,
     databasePath: path.resolve(/*turbopackIgnore: true*/ e.CAVITAS_DATABASE ?? path.join(dataDir, "cavitas.sqlite")),
     port: e.PORT,
+    host: e.CAVITAS_HOST,
     appUrl: (e.CAVITAS_APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, ""),
     smtpHost: e.CAVITAS_SMTP_HOST,
     smtpPort: e.CAVITAS_SMTP_PORT,
@@ -53,9 +61,13 @@ export function env(): Env {
     mailFrom: e.CAVITAS_MAIL_FROM,
     uploadLimitBytes: Math.round(e.CAVITAS_UPLOAD_LIMIT_MB * 1024 * 1024),
     authSecret: e.BETTER_AUTH_SECRET ?? localSecret(dataDir),
+    logLevel: e.CAVITAS_LOG_LEVEL,
   };
   return cached;
 }
+
+// Next.js sets NODE_ENV itself ("development" under `next dev`); the page policy relaxes for it.
+export const isDevelopment = () => process.env.NODE_ENV === "development";
 
 // Without a configured secret, one is made once per data folder and kept there, so a
 // fresh machine needs no hand-made .env and sessions survive restarts.

@@ -7,7 +7,9 @@ export type ErrorCode =
   | "conflict"
   | "gone"
   | "invalid"
-  | "bad_request";
+  | "bad_request"
+  | "too_large"
+  | "unsupported_media";
 
 export type FieldIssue = { field: string; message: string };
 
@@ -31,6 +33,17 @@ export const gone = (message: string) => new AppError("gone", message);
 export const invalid = (issues: FieldIssue[], message = "Some fields need attention.") =>
   new AppError("invalid", message, issues);
 
+export const tooLarge = (limitBytes: number, field?: string) => {
+  const message = `The request is larger than this action accepts (${formatBytes(limitBytes)}). Nothing was changed.`;
+  return new AppError("too_large", message, field ? [{ field, message }] : []);
+};
+export const unsupportedMedia = (expected: string) =>
+  new AppError("unsupported_media", `Send this request as ${expected}. Nothing was changed.`);
+
+function formatBytes(n: number): string {
+  return n >= 1048576 ? `${Math.round(n / 1048576)} MB` : `${Math.round(n / 1024)} KB`;
+}
+
 export const STATUS: Record<ErrorCode, number> = {
   unauthenticated: 401,
   forbidden: 403,
@@ -39,4 +52,6 @@ export const STATUS: Record<ErrorCode, number> = {
   gone: 410,
   invalid: 422,
   bad_request: 400,
+  too_large: 413,
+  unsupported_media: 415,
 };
