@@ -6,7 +6,7 @@ import { roleMay, type ProjectAction } from "@/lib/permissions";
 import { PROJECT_ROLES, type ProjectRole } from "@/lib/roles";
 import { tableCounts } from "../support/counts";
 import { pathFor, routeFiles } from "../support/route-files";
-import { freshInvitation as inviteIn, freshPin as pinIn, freshRoom as roomIn, paramsFor, type RouteWorld } from "../support/route-world";
+import { freshInvitation as inviteIn, freshPin as pinIn, freshRoom as roomIn, paramsFor, walkRoom, type RouteWorld } from "../support/route-world";
 
 // Walks every guarded route handler for every project role, for a signed-in outsider, and
 // for no session. Expectations come from the permissions table (lib/permissions.ts, the
@@ -224,7 +224,7 @@ const ENDPOINTS: Endpoint[] = [
     method: "POST",
     writes: true,
     load: () => import("@/app/api/v1/projects/[projectId]/rooms/route"),
-    prepare: async () => ({ params: { projectId }, body: roomBody() }),
+    prepare: async () => ({ params: { projectId }, body: walkRoom() }),
     expected: projectRule("design.edit", 201),
   },
   {
@@ -240,7 +240,7 @@ const ENDPOINTS: Endpoint[] = [
     method: "PUT",
     writes: true,
     load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/route"),
-    prepare: async () => ({ params: { projectId, roomId: await freshRoom() }, body: { ...roomBody(), name: "Renamed", version: 1 } }),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() }, body: { ...walkRoom(), name: "Renamed", version: 1 } }),
     expected: projectRule("design.edit", 200),
   },
   {
@@ -332,10 +332,6 @@ const ENDPOINTS: Endpoint[] = [
     expected: (who) => (who === "none" ? 401 : who === "admin" ? 201 : 403),
   },
 ];
-
-function roomBody() {
-  return { name: "Walk room", use: "speech", shape: "shoebox", length: 8, width: 6, height: 3 };
-}
 
 function buildUpBody() {
   return { name: "Walk build-up", spec: SPEC, moduleWidth: 0.6, moduleHeight: 1.2, borderX: 0.03, borderY: 0.03 };

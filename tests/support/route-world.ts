@@ -9,11 +9,11 @@ import type { RouteFile } from "./route-files";
 
 export type RouteWorld = { projectId: string; consultant: Actor; architect: Actor; mail: MailCatcher };
 
-const ROOM = { name: "Walk room", use: "speech", shape: "shoebox", length: 8, width: 6, height: 3 };
+export const walkRoom = () => ({ name: "Walk room", use: "speech", shape: "shoebox", length: 8, width: 6, height: 3 });
 
 export async function freshRoom(w: RouteWorld): Promise<string> {
   const { createRoom } = await import("@/lib/services/rooms");
-  return createRoom(w.consultant, w.projectId, ROOM).id;
+  return createRoom(w.consultant, w.projectId, walkRoom()).id;
 }
 
 export async function freshPin(w: RouteWorld): Promise<string> {
