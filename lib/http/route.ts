@@ -1,4 +1,4 @@
-import { unauthenticated } from "@/lib/errors";
+import { notFound, unauthenticated } from "@/lib/errors";
 import { actorFromHeaders } from "@/lib/auth/session";
 import { env } from "@/lib/env";
 import type { Actor } from "@/lib/services/actor";
@@ -58,11 +58,21 @@ export function route<P = Record<string, never>>(fn: (args: RouteArgs<P>) => Pro
 // same gate: the origin check, a JSON-only body of at most 16 KB, a request id and a log line.
 const AUTH_BODY_LIMIT = 16 * 1024;
 
+// Endpoints better-auth offers that Cavitas does not use, closed: each would change an account
+// around the app's own checks (a name changes through PATCH /api/v1/me and its validation; an
+// e-mail address is what invitations are bound to). update-user answered 500 to {"name":null}.
+const CLOSED_AUTH_ENDPOINTS = ["/update-user", "/change-email", "/delete-user"];
+const isClosed = (pathname: string) => {
+  const endpoint = pathname.replace(/^\/api\/auth/, "");
+  return CLOSED_AUTH_ENDPOINTS.some((c) => endpoint === c || endpoint.startsWith(`${c}/`));
+};
+
 export function authRoute(handler: (req: Request) => Promise<Response>) {
   return (req: Request): Promise<Response> =>
     withRequestLog(req, authRoutePattern(new URL(req.url).pathname), async () => {
       try {
         assertSameOrigin(req, appOrigins(env().appUrl));
+        if (isClosed(new URL(req.url).pathname)) throw notFound("This account action");
         if (!changesState(req.method)) return await handler(req);
         const text = await readJsonText(req, AUTH_BODY_LIMIT);
         return await handler(new Request(req.url, { method: req.method, headers: req.headers, body: text || undefined }));

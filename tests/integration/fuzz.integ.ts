@@ -250,3 +250,39 @@ describe("fuzzed path parameters, every route", () => {
     });
   }
 });
+
+// better-auth's own endpoints, through the same gate: the same promises for what they answer.
+const AUTH_TEMPLATES: Record<string, () => unknown> = {
+  "/sign-in/email": () => ({ email: uniqueEmail(), password: "wrong-password-123" }),
+  "/sign-up/email": () => ({ email: uniqueEmail(), password: "a-long-password-1", name: "Fuzz (fictional)" }),
+  "/update-user": () => ({ name: "Fuzz (fictional)" }),
+  "/change-password": () => ({ currentPassword: "wrong-password-123", newPassword: "another-password-1" }),
+  "/request-password-reset": () => ({ email: uniqueEmail(), redirectTo: "/sign-in" }),
+  "/reset-password": () => ({ token: "not-a-token", newPassword: "another-password-1" }),
+};
+
+describe("fuzzed bodies, better-auth's endpoints", () => {
+  for (const [endpoint, template] of Object.entries(AUTH_TEMPLATES)) {
+    it(`POST /api/auth${endpoint}`, async () => {
+      const { POST } = await import("@/app/api/auth/[...all]/route");
+      const file: RouteFile = { key: `POST /api/auth${endpoint}`, method: "POST", route: `/api/auth${endpoint}`, params: [], load: async () => ({ POST }) };
+      // A refusal from better-auth is JSON of its own shape; what matters is no 500 and no leak.
+      const check = (note: string, r: { status: number; text: string; before: string }) => {
+        expect(r.status, `${file.key} ← ${note}: ${r.text.slice(0, 300)}`).toBeLessThan(500);
+        if (r.status >= 400) {
+          tally.refused++;
+          expect(r.text, `${file.key} ← ${note}`).not.toMatch(LEAKS);
+          expect(databaseDigest(), `${file.key} ← ${note} changed the database`).toBe(r.before);
+        } else tally.accepted++;
+      };
+      await fc.assert(
+        fc.asyncProperty(bodies(template()), async (b) => check(b.note, await send(file, {}, b))),
+        { numRuns: RUNS },
+      );
+      const base = template() as Record<string, unknown>;
+      for (const key of Object.keys(base)) {
+        for (const value of SUSPECTS) check(`${key} = ${JSON.stringify(value)}`, await send(file, {}, json({ ...base, [key]: value }, "")));
+      }
+    });
+  }
+});

@@ -149,6 +149,14 @@ describe("better-auth's own routes behind the same gate (defect 1)", () => {
     expect(await currentName()).toBe("Original Name (fictional)");
   });
 
+  it("closes better-auth's account endpoints that Cavitas does not use (update-user was a 500 on a null name)", async () => {
+    for (const endpoint of ["/update-user", "/change-email", "/delete-user"]) {
+      const res = await authCall(endpoint, { cookie, origin: APP_URL, "content-type": "application/json" }, JSON.stringify({ name: null, newEmail: "x@example.test" }));
+      expect(res.status, endpoint).toBe(404);
+    }
+    expect(await currentName()).toBe("Original Name (fictional)");
+  });
+
   it("refuses a form-encoded sign-in from the app's own origin with 415", async () => {
     const u = await makeUser();
     const res = await authCall("/sign-in/email", { origin: APP_URL, "content-type": "application/x-www-form-urlencoded" }, `email=${encodeURIComponent(u.email)}&password=test-password-123`);
