@@ -75,15 +75,16 @@ describe("security headers", () => {
       document.addEventListener("securitypolicyviolation", (e) => console.error(`policy violation: ${e.violatedDirective} ${e.blockedURI}`)),
     );
     await s.signIn("consultant@example.test");
+    // Each screen loaded as a document, since the policy applies to document loads.
     await s.page.getByRole("link", { name: "Saltmarsh Library reading room (fictional)" }).click();
-    await s.page.getByRole("link", { name: "Rooms" }).first().click();
-    await s.page.getByTestId("room-table").waitFor();
-    await s.page.getByTestId("room-table").locator("a").first().click();
-    await s.page.waitForURL(/\/rooms\/[^/]+$/);
-    await s.page.getByRole("link", { name: "Build-ups" }).first().click();
-    await s.page.waitForURL(/\/build-ups$/);
-    await s.goto("/settings");
-    await s.page.waitForLoadState("networkidle");
+    await s.page.waitForURL(/\/projects\/[^/]+$/);
+    const project = new URL(s.page.url()).pathname;
+    await s.goto(`${project}/rooms`);
+    const room = (await s.page.getByTestId("rooms-table").locator("a").first().getAttribute("href"))!;
+    for (const screen of [room, `${room}/board/wall-a`, `${project}/build-ups`, "/settings"]) {
+      await s.goto(screen);
+      await s.page.waitForLoadState("networkidle");
+    }
     // Session.close fails the test on any console error, violations included.
   });
 });
