@@ -4,6 +4,7 @@ import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "@/db/seed";
 import { env } from "@/lib/env";
 import { startMailCatcher } from "@/lib/mail/catcher";
 import { buildIsCurrent, nextBin } from "./build-state";
+import { nextServerArgs } from "./server-args";
 
 // npm run demo | npm run dev: migrate, seed the fictional demo scenario, start the local mail
 // catcher, then the Next.js server (a production build for the demo, the dev server for dev).
@@ -25,7 +26,7 @@ async function main() {
     }
   }
 
-  const server = spawn(process.execPath, [nextBin(), mode === "dev" ? "dev" : "start", "-p", String(e.port)], {
+  const server = spawn(process.execPath, [nextBin(), ...nextServerArgs(mode, e)], {
     stdio: "inherit",
     env: childEnv,
   });
@@ -33,7 +34,7 @@ async function main() {
   console.log(
     [
       "",
-      `Cavitas ${mode}: ${e.appUrl}`,
+      `Cavitas ${mode}: ${e.appUrl} (listening on ${e.host}:${e.port}; set CAVITAS_HOST to widen)`,
       `Database: ${e.databasePath}${seeded.created ? " (demo scenario loaded)" : ""}`,
       `Local mail catcher: inbox http://127.0.0.1:${catcher.httpPort}/ (SMTP 127.0.0.1:${catcher.smtpPort})`,
       `Demo accounts (password ${DEMO_PASSWORD}):`,
