@@ -4,6 +4,10 @@ import { figureFont, greekFont, textFont } from "./fonts";
 import { Providers } from "./providers";
 import "./globals.css";
 
+// Every page carries a Content-Security-Policy nonce made for its request (proxy.ts), so none
+// may be prerendered: a prerendered page's scripts would have no nonce and be refused.
+export const dynamic = "force-dynamic";
+
 // The icon, the web manifest and robots.txt are served from public/.
 export const metadata: Metadata = {
   title: { default: "Cavitas", template: "%s · Cavitas" },

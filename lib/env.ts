@@ -8,6 +8,8 @@ const envSchema = z.object({
   CAVITAS_DATA_DIR: z.string().min(1).default(".data"),
   CAVITAS_DATABASE: z.string().min(1).optional(),
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  // The address `npm run demo` and `npm run dev` listen on: loopback only unless widened.
+  CAVITAS_HOST: z.string().min(1).default("127.0.0.1"),
   CAVITAS_APP_URL: z.url().optional(),
   CAVITAS_SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   CAVITAS_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
@@ -22,10 +24,14 @@ const envSchema = z.object({
     .optional()
     .transform((v) => (v ?? "").split(",").map((s) => s.trim()).filter(Boolean))
     .pipe(z.array(z.union([z.ipv4(), z.ipv6(), z.cidrv4(), z.cidrv6()], { error: "each entry must be an IP address or a CIDR range" }))),
+  CAVITAS_LOG_LEVEL: z.enum(["debug", "info", "warn", "error", "silent"]).default("info"),
 });
+
+export type LogLevel = z.infer<typeof envSchema>["CAVITAS_LOG_LEVEL"];
 
 export type Env = {
   port: number;
+  host: string;
   dataDir: string;
   databasePath: string;
   appUrl: string;
@@ -36,6 +42,7 @@ export type Env = {
   uploadLimitBytes: number;
   authSecret: string;
   trustedProxies: string[];
+  logLevel: LogLevel;
 };
 
 let cached: Env | null = null;
@@ -54,6 +61,7 @@ export function env(): Env {
     dataDir,
     databasePath: path.resolve(/*turbopackIgnore: true*/ e.CAVITAS_DATABASE ?? path.join(dataDir, "cavitas.sqlite")),
     port: e.PORT,
+    host: e.CAVITAS_HOST,
     appUrl: (e.CAVITAS_APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, ""),
     smtpHost: e.CAVITAS_SMTP_HOST,
     smtpPort: e.CAVITAS_SMTP_PORT,
@@ -62,9 +70,13 @@ export function env(): Env {
     uploadLimitBytes: Math.round(e.CAVITAS_UPLOAD_LIMIT_MB * 1024 * 1024),
     authSecret: e.BETTER_AUTH_SECRET ?? localSecret(dataDir),
     trustedProxies: e.CAVITAS_TRUSTED_PROXIES,
+    logLevel: e.CAVITAS_LOG_LEVEL,
   };
   return cached;
 }
+
+// Next.js sets NODE_ENV itself ("development" under `next dev`); the page policy relaxes for it.
+export const isDevelopment = () => process.env.NODE_ENV === "development";
 
 // Without a configured secret, one is made once per data folder and kept there, so a
 // fresh machine needs no hand-made .env and sessions survive restarts.

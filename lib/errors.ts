@@ -9,7 +9,9 @@ export type ErrorCode =
   | "invalid"
   | "too_many"
   | "bad_request"
-  | "failed";
+  | "failed"
+  | "too_large"
+  | "unsupported_media";
 
 export type FieldIssue = { field: string; message: string };
 
@@ -38,6 +40,16 @@ export const failed = (message: string) => new AppError("failed", message);
 
 /** a limit was reached; the message says how long to wait */
 export const tooMany = (message: string) => new AppError("too_many", message);
+export const tooLarge = (limitBytes: number, field?: string) => {
+  const message = `The request is larger than this action accepts (${formatBytes(limitBytes)}). Nothing was changed.`;
+  return new AppError("too_large", message, field ? [{ field, message }] : []);
+};
+export const unsupportedMedia = (expected: string) =>
+  new AppError("unsupported_media", `Send this request as ${expected}. Nothing was changed.`);
+
+function formatBytes(n: number): string {
+  return n >= 1048576 ? `${Math.round(n / 1048576)} MB` : `${Math.round(n / 1024)} KB`;
+}
 
 export const STATUS: Record<ErrorCode, number> = {
   unauthenticated: 401,
@@ -49,4 +61,6 @@ export const STATUS: Record<ErrorCode, number> = {
   too_many: 429,
   bad_request: 400,
   failed: 500,
+  too_large: 413,
+  unsupported_media: 415,
 };

@@ -25,6 +25,29 @@ export function sniff(bytes: Uint8Array): UploadKind | null {
 
 export const mimeOf = (kind: UploadKind) => MIME[kind];
 
+// The endings a person may have given each type; any other is replaced or added to.
+const ENDINGS: Record<UploadKind, readonly string[]> = { pdf: ["pdf"], png: ["png"], jpeg: ["jpg", "jpeg", "jpe"], webp: ["webp"], zip: ["zip"] };
+const KNOWN_ENDINGS = new Set(Object.values(ENDINGS).flat());
+const MAX_NAME = 120;
+
+// A person's file name, made safe to keep and to send back: no control, direction-override or
+// path characters, at most 120 characters, and an ending true to the content (a PDF sent as
+// "plan.png" is kept as "plan.pdf"; "notes.txt" holding a PDF as "notes.txt.pdf").
+export function fileNameFor(name: string, kind: UploadKind): string {
+  const cleaned = name
+    .replace(/[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g, "")
+    .normalize("NFC")
+    .replace(/[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/g, "")
+    .replace(/[\\/]/g, "_")
+    .trim();
+  const match = /^(.*)\.([A-Za-z0-9]{1,8})$/.exec(cleaned);
+  const ending = match?.[2].toLowerCase();
+  const base = match && ending && KNOWN_ENDINGS.has(ending) ? match[1] : cleaned;
+  const keep = ending && ENDINGS[kind].includes(ending) ? ending : EXT[kind];
+  const short = Array.from(base.replace(/^[.\s]+/, "")).slice(0, MAX_NAME).join("").trim();
+  return `${short || "upload"}.${keep}`;
+}
+
 const WORDS: Record<UploadKind, string> = { pdf: "PDF", png: "PNG", jpeg: "JPEG", webp: "WebP", zip: "zip archive" };
 
 export type StoredFile = { sha256: string; kind: UploadKind; mime: string; size: number };

@@ -41,6 +41,9 @@ export function formatLength(metres: number, units: UnitPreference, opts: Format
   if (!Number.isFinite(metres)) return "—";
   const sign = metres < 0 ? MINUS : "";
   const size = Math.abs(metres);
+  // Past a million kilometres a length is only ever quoted back in a refusal (a fuzzed or
+  // mistyped request): whole metres or feet say it plainly, where sixteenths would overflow.
+  if (size > 1e9) return sign + (units === "imperial" && Number.isFinite(size / FOOT) ? `${decimal(size / FOOT, 0)} ft` : `${decimal(size, 0)} m`);
   if (units === "metric") {
     return scale === "room" ? `${sign}${decimal(size, 3)} m` : `${sign}${decimal(size * 1000, scale === "fine" ? 2 : 1)} mm`;
   }

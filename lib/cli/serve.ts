@@ -5,6 +5,7 @@ import { env } from "@/lib/env";
 import { startMailCatcher } from "@/lib/mail/catcher";
 import { buildIsCurrent, nextBin } from "./build-state";
 import { seedDemoSubmittals } from "./demo-submittals";
+import { nextServerArgs } from "./server-args";
 
 // npm run demo | npm run dev: migrate, seed the fictional demo scenario, start the local mail
 // catcher, then the Next.js server (a production build for the demo, the dev server for dev).
@@ -28,7 +29,7 @@ async function main() {
     }
   }
 
-  const server = spawn(process.execPath, [nextBin(), mode === "dev" ? "dev" : "start", "-p", String(e.port)], {
+  const server = spawn(process.execPath, [nextBin(), ...nextServerArgs(mode, e)], {
     stdio: "inherit",
     env: childEnv,
   });
@@ -36,7 +37,7 @@ async function main() {
   console.log(
     [
       "",
-      `Cavitas ${mode}: ${e.appUrl}`,
+      `Cavitas ${mode}: ${e.appUrl} (listening on ${e.host}:${e.port}; set CAVITAS_HOST to widen)`,
       `Database: ${e.databasePath}${seeded.created ? " (demo scenario loaded)" : ""}`,
       `Local mail catcher: inbox http://127.0.0.1:${catcher.httpPort}/ (SMTP 127.0.0.1:${catcher.smtpPort})`,
       `Demo accounts (password ${DEMO_PASSWORD}):`,

@@ -3,7 +3,7 @@ import { getDb, transaction } from "@/db/client";
 import { attachment, type Attachment } from "@/db/schema";
 import { invalid, notFound } from "@/lib/errors";
 import type { ProjectAction } from "@/lib/permissions";
-import { readStoredFile, storeFile, type UploadKind } from "@/lib/storage";
+import { fileNameFor, kindOfMime, readStoredFile, storeFile, type UploadKind } from "@/lib/storage";
 import type { Actor } from "./actor";
 import { authorize } from "./guard";
 import { recordAudit } from "./audit";
@@ -41,7 +41,7 @@ export function uploadAttachment(
   const access = authorize(actor, projectId, rules.upload);
   if (!input.bytes) throw invalid([{ field: "file", message: "Choose a file to upload." }]);
   const stored = storeFile(input.bytes, rules.kinds);
-  const name = (input.name || "upload").replace(/[\\/\r\n"]/g, "_").slice(0, 200);
+  const name = fileNameFor(input.name, stored.kind);
   const row = transaction((tx) => {
     const row = tx
       .insert(attachment)
@@ -54,7 +54,7 @@ export function uploadAttachment(
   return summarizeAttachment(row);
 }
 
-export function readAttachment(actor: Actor | null, projectId: string, attachmentId: string): { row: Attachment; bytes: Buffer } {
+export function readAttachment(actor: Actor | null, projectId: string, attachmentId: string): { name: string; mime: string; bytes: Buffer } {
   authorize(actor, projectId, "project.view");
   const row = getDb()
     .select()
@@ -63,12 +63,16 @@ export function readAttachment(actor: Actor | null, projectId: string, attachmen
     .get();
   if (!row) throw notFound("File");
   authorize(actor, projectId, PURPOSES[row.purpose].view);
-  return { row, bytes: readStoredFile(row.sha256, row.mime) };
+  // Files stored before names were cleaned at upload get the same treatment on the way out.
+  const kind = kindOfMime(row.mime);
+  const name = kind ? fileNameFor(row.originalName, kind) : row.originalName;
+  return { name, mime: row.mime, bytes: readStoredFile(row.sha256, row.mime) };
 }
 
 // For services that link an upload to something (a build-up's fire report, a material's test
 // report): the attachment must belong to the project and be of the right purpose.
 export function requireAttachment(projectId: string, attachmentId: string, purpose: AttachmentPurpose, field: string): Attachment {
+  if (!attachmentId.trim()) throw invalid([{ field, message: "Choose a file, or send null for none." }]);
   const row = getDb()
     .select()
     .from(attachment)

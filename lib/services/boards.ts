@@ -66,13 +66,20 @@ function roles(projectId: string): Map<string, ProjectRole> {
   return new Map(getDb().select().from(membership).where(eq(membership.projectId, projectId)).all().map((m) => [m.userId, m.role]));
 }
 
+// A panel's id is the editor's and unique within its board; its row is keyed by the board's
+// id with it, so an id that exists on another board (another project's) neither clashes nor
+// reveals anything. Rows written before this carry the bare id.
+const placementRowId = (boardId: string, panelId: string) => `${boardId}:${panelId}`;
+const panelIdOf = (boardId: string, rowId: string) => (rowId.startsWith(`${boardId}:`) ? rowId.slice(boardId.length + 1) : rowId);
+
 export function boardPlacements(boardId: string): BoardPlacement[] {
   return getDb()
     .select({ id: placement.id, buildUpId: placement.buildUpId, code: placement.code, x: placement.x, y: placement.y, width: placement.width, height: placement.height })
     .from(placement)
     .where(eq(placement.boardId, boardId))
     .orderBy(asc(placement.position))
-    .all();
+    .all()
+    .map((p) => ({ ...p, id: panelIdOf(boardId, p.id) }));
 }
 
 function pinsOf(projectId: string, boardId: string): PinView[] {
@@ -156,7 +163,7 @@ export function saveBoard(actor: Actor | null, projectId: string, roomId: string
       .get();
     if (!bumped) throw conflict(`This board was changed by someone else (now version ${b.version}). Reload it to see their changes; nothing of yours was saved.`, "version");
     tx.delete(placement).where(eq(placement.boardId, b.id)).run();
-    input.placements.forEach((p, position) => tx.insert(placement).values({ ...p, boardId: b.id, position }).run());
+    input.placements.forEach((p, position) => tx.insert(placement).values({ ...p, id: placementRowId(b.id, p.id), boardId: b.id, position }).run());
     recordAudit(tx, { actorId: access.actor.userId, projectId, action: "board.saved", subjectId: b.id, detail: { surfaceKey, version: bumped.version, panels: input.placements.length } });
   });
   return getBoard(actor, projectId, roomId, surfaceKey);

@@ -81,7 +81,7 @@ const columns = (input: BuildUpFields) => ({
 export function createBuildUp(actor: Actor | null, projectId: string, raw: unknown): BuildUpView {
   const access = authorize(actor, projectId, "design.edit");
   const input = parseInput(buildUpSchemas(access.actor.unitPreference).create, raw);
-  if (input.fireReportId) requireAttachment(projectId, input.fireReportId, "fire-report", "fireReportId");
+  if (input.fireReportId !== null) requireAttachment(projectId, input.fireReportId, "fire-report", "fireReportId");
   const row = transaction((tx) => {
     const row = tx.insert(buildUp).values({ projectId, ...columns(input) }).returning().get();
     recordAudit(tx, { actorId: access.actor.userId, projectId, action: "build-up.created", subjectId: row.id, detail: { name: row.name } });
@@ -94,7 +94,7 @@ export function updateBuildUp(actor: Actor | null, projectId: string, buildUpId:
   const access = authorize(actor, projectId, "design.edit");
   const current = load(projectId, buildUpId);
   const input = parseInput(buildUpSchemas(access.actor.unitPreference).update, raw);
-  if (input.fireReportId) requireAttachment(projectId, input.fireReportId, "fire-report", "fireReportId");
+  if (input.fireReportId !== null) requireAttachment(projectId, input.fireReportId, "fire-report", "fireReportId");
   const row = transaction((tx) => {
     // Only the version the editor started from may be replaced; a stale save changes nothing.
     const updated = tx

@@ -58,7 +58,7 @@ export const createMaterialSchema = z.object({
 export function createProjectMaterial(actor: Actor | null, projectId: string, raw: unknown): MaterialView {
   const access = authorize(actor, projectId, "design.edit");
   const input = parseInput(createMaterialSchema, raw);
-  if (input.reportId) requireAttachment(projectId, input.reportId, "test-report", "reportId");
+  if (input.reportId !== null) requireAttachment(projectId, input.reportId, "test-report", "reportId");
   const row = transaction((tx) => {
     const row = tx
       .insert(projectMaterial)

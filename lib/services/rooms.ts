@@ -17,6 +17,7 @@ import { recordAudit } from "./audit";
 import { materialLookup } from "./materials";
 import { openPinCounts, placedPanels } from "./boards";
 import { treatedArea } from "@/lib/board/treated-area";
+import { checkStamps, StampedCache } from "./check-cache";
 import { fieldsFromRows, geometryOf, panelAlphaOf, roomIssues, runCheck, surfacesFor, type PanelAlpha } from "@/lib/room-model";
 
 export type RoomView = Omit<RoomFields, "surfaces"> & {
@@ -42,8 +43,6 @@ export type RoomSummary = Pick<RoomView, "id" | "name" | "use" | "volumeM3" | "v
   mean: { before: number | null; after: number | null; low: number | null; high: number | null; status: string } | null;
   treatedArea: number;
   openPins: number;
-  /** build-ups of the room whose fire class is missing, lower or not comparable */
-  fireFlags: number;
 };
 
 // Each build-up of the project evaluated once per request, for every room that uses it.
@@ -120,35 +119,40 @@ function view(
   };
 }
 
+// Each room's summary is kept by the stamps its check depends on (./check-cache.ts); the
+// open-pin counts are read fresh. Build-ups are evaluated only if some room needs its check.
+const summaries = new StampedCache<Omit<RoomSummary, "openPins">>(5000);
+export const roomSummaryCacheStats = () => ({ ...summaries.stats });
+
 export function listRooms(actor: Actor | null, projectId: string): RoomSummary[] {
   authorize(actor, projectId, "design.view");
-  const panels = projectPanels(projectId);
+  const stamps = checkStamps(projectId);
   const pins = openPinCounts(projectId);
-  const lookup = materialLookup(projectId);
-  const fire = projectFire(projectId);
+  let inputs: { panels: Map<string, PanelAlpha>; lookup: ReturnType<typeof materialLookup> } | null = null;
+  const shared = () => (inputs ??= { panels: projectPanels(projectId), lookup: materialLookup(projectId) });
   return getDb()
     .select()
     .from(room)
     .where(eq(room.projectId, projectId))
     .orderBy(asc(room.name))
     .all()
-    .map((row) => {
-      const v = view(row, storedFields(row), panels, pins, lookup, fire);
-      const mean = v.check.ok ? (v.check.mean ?? midFrequency(v.check.octaves)) : null;
-      return {
-        id: v.id,
-        name: v.name,
-        use: v.use,
-        volumeM3: v.volumeM3,
-        version: v.version,
-        updatedAt: v.updatedAt,
-        target: v.targetResolved?.label ?? null,
-        mean: mean ? { before: mean.before, after: mean.after, low: mean.low, high: mean.high, status: mean.status } : null,
-        treatedArea: [...v.treatments, ...v.placed].reduce((sum, t) => sum + t.area, 0),
-        openPins: v.openPins,
-        fireFlags: v.fire.flagged,
-      };
-    });
+    .map((row) => ({ ...summaries.get(row.id, stamps.keyOf(row), () => summarize(row, shared().panels, shared().lookup)), openPins: pins.get(row.id) ?? 0 }));
+}
+
+function summarize(row: Room, panels: Map<string, PanelAlpha>, lookup: ReturnType<typeof materialLookup>): Omit<RoomSummary, "openPins"> {
+  const v = view(row, storedFields(row), panels, new Map(), lookup);
+  const mean = v.check.ok ? (v.check.mean ?? midFrequency(v.check.octaves)) : null;
+  return {
+    id: v.id,
+    name: v.name,
+    use: v.use,
+    volumeM3: v.volumeM3,
+    version: v.version,
+    updatedAt: v.updatedAt,
+    target: v.targetResolved?.label ?? null,
+    mean: mean ? { before: mean.before, after: mean.after, low: mean.low, high: mean.high, status: mean.status } : null,
+    treatedArea: [...v.treatments, ...v.placed].reduce((sum, t) => sum + t.area, 0),
+  };
 }
 
 // Where the target names no mean (limits per octave, a common-practice range), the list shows

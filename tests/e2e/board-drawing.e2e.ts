@@ -72,7 +72,7 @@ describe("the board, drawn and worked by keyboard", () => {
     const page = s.page;
     await page.getByTestId("board-canvas").focus();
     await page.keyboard.press("Tab");
-    await expect.poll(() => page.getByTestId("announce-selection").textContent()).toMatch(/^P-001 selected: 600 mm wide, 2.4 m high, 600 mm from the left, 400 mm above the datum\.$/);
+    await expect.poll(() => page.getByTestId("announce-selection").textContent()).toMatch(/^P-001 selected: 600 mm wide, 2400 mm high, 600 mm from the left, 400 mm above the datum\.$/);
     for (let i = 0; i < 15; i++) await page.keyboard.press("Tab");
     expect(await page.getByTestId("selection-one").getByLabel("Panel code").inputValue()).toBe("P-016");
     expect(await page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("board-canvas");
@@ -109,7 +109,7 @@ describe("the board, drawn and worked by keyboard", () => {
     expect(await page.locator('[data-testid="rules"] [data-rule="overlap"]').count()).toBe(2);
     // Alt+arrow resizes from the lower-left corner.
     await page.keyboard.press("Alt+ArrowUp");
-    await expect.poll(() => page.getByTestId("announce-selection").textContent()).toMatch(/P-003 selected: 600 mm wide, 2.41 m high, 1 m from the left/);
+    await expect.poll(() => page.getByTestId("announce-selection").textContent()).toMatch(/P-003 selected: 600 mm wide, 2410 mm high, 1000 mm from the left/);
     await page.keyboard.press("Control+z");
     await page.keyboard.press("Control+z");
     for (let i = 0; i < 4; i++) await page.keyboard.press("Control+z");
@@ -132,7 +132,7 @@ describe("the board, drawn and worked by keyboard", () => {
     await width.getByText(/at least 20 mm/).waitFor({ timeout: 10_000 });
     await page.waitForTimeout(4000);
     expect(refusals.length).toBeLessThanOrEqual(1);
-    if (refusals.length === 1) expect(await page.getByTestId("save-refusal").textContent()).toMatch(/P-001\s*Width: A panel must be at least 20 mm wide/);
+    if (refusals.length === 1) expect(await page.getByTestId("save-refusal").textContent()).toMatch(/P-001\s*Width: The panel's width must be at least 20 mm/);
     await width.getByRole("textbox").fill("600 mm");
     await width.getByRole("textbox").press("Enter");
     await expect.poll(() => savedVersion(page), { timeout: 10_000 }).not.toBeNull();
@@ -147,7 +147,7 @@ describe("the board, drawn and worked by keyboard", () => {
     await page.mouse.click(at.x, at.y);
     await page.getByLabel(/Comment at this point \(on panel P-008\)/).fill("x".repeat(2500));
     await page.getByRole("button", { name: "Place pin" }).click();
-    await page.getByText("Keep the comment under 2000 characters.").waitFor();
+    await page.getByText(/Keep the comment to 2000 characters/).waitFor();
     await page.getByLabel(/Comment at this point/).fill("Check the fixing rail behind P-008 clears the conduit.");
     await page.getByRole("button", { name: "Place pin" }).click();
     await page.locator('[data-testid="pins"] li').filter({ hasText: "fixing rail behind P-008" }).waitFor();

@@ -1,5 +1,3 @@
-import fs from "node:fs";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { useTestEnvironment } from "../support/test-env";
 import { addMember, makeAttachment, makeBuildUp, makeFirm, makeProject, makeUser, SPEC, TEST_PASSWORD, TINY_PDF, uniqueEmail } from "../support/factories";
@@ -11,6 +9,8 @@ import { PROJECT_ROLES, type ProjectRole } from "@/lib/roles";
 import { tableCounts } from "../support/counts";
 import { actorOf } from "../support/actors";
 import { designedRoom, issueConfirmed, pdfHashOf, photoWithLocation } from "../support/submittals";
+import { pathFor, routeFiles } from "../support/route-files";
+import { freshInvitation as inviteIn, freshPin as pinIn, freshRoom as roomIn, paramsFor, walkRoom, type RouteWorld } from "../support/route-world";
 
 // Walks every guarded route handler for every project role, for a signed-in outsider, and
 // for no session. Expectations come from the permissions table (lib/permissions.ts, the
@@ -22,6 +22,7 @@ const EVERYONE: Who[] = [...PROJECT_ROLES, "outsider", "admin", "none"];
 let envHandle: Awaited<ReturnType<typeof useTestEnvironment>>;
 let projectId = "";
 let firmId = "";
+let world: RouteWorld;
 const cookies = {} as Record<Exclude<Who, "none">, string>;
 const emails = {} as Record<Exclude<Who, "none">, string>;
 
@@ -44,20 +45,15 @@ beforeAll(async () => {
   const admin = await makeUser({ firmId: firm.id, isFirmAdmin: true });
   emails.admin = admin.email;
   cookies.admin = await signIn(admin.email);
+  const { actorFromHeaders } = await import("@/lib/auth/session");
+  const actorOf = async (who: ProjectRole) => (await actorFromHeaders(new Headers({ cookie: cookies[who] })))!;
+  world = { projectId, consultant: await actorOf("consultant"), architect: await actorOf("architect"), mail: envHandle.mail };
 });
 afterAll(() => envHandle.cleanup());
 
-// A fresh open invitation made by the consultant, for the routes that act on one.
-async function freshInvitation(): Promise<{ id: string; token: string }> {
-  const { inviteToProject } = await import("@/lib/services/invitations");
-  const { actorFromHeaders } = await import("@/lib/auth/session");
-  const actor = await actorFromHeaders(new Headers({ cookie: cookies.consultant }));
-  const email = uniqueEmail("invitee");
-  const { invitation } = await inviteToProject(actor, projectId, { email, role: "architect" });
-  const mail = envHandle.mail.messages.find((m) => m.to.includes(email))!;
-  const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)![1];
-  return { id: invitation.id, token };
-}
+const freshInvitation = () => inviteIn(world);
+const freshRoom = () => roomIn(world);
+const freshPin = () => pinIn(world);
 
 type Endpoint = {
   key: string; // "METHOD /api/v1/..." as the file system names it
@@ -237,7 +233,7 @@ const ENDPOINTS: Endpoint[] = [
     method: "POST",
     writes: true,
     load: () => import("@/app/api/v1/projects/[projectId]/rooms/route"),
-    prepare: async () => ({ params: { projectId }, body: roomBody() }),
+    prepare: async () => ({ params: { projectId }, body: walkRoom() }),
     expected: projectRule("design.edit", 201),
   },
   {
@@ -253,7 +249,7 @@ const ENDPOINTS: Endpoint[] = [
     method: "PUT",
     writes: true,
     load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/route"),
-    prepare: async () => ({ params: { projectId, roomId: await freshRoom() }, body: { ...roomBody(), name: "Renamed", version: 1 } }),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() }, body: { ...walkRoom(), name: "Renamed", version: 1 } }),
     expected: projectRule("design.edit", 200),
   },
   {
@@ -430,6 +426,7 @@ const ENDPOINTS: Endpoint[] = [
     prepare: async () => ({ params: { projectId } }),
     expected: projectRule("project.view", 200),
   },
+  { key: "GET /api/health", method: "GET", writes: false, load: () => import("@/app/api/health/route"), expected: () => 200 },
   { key: "GET /api/v1/firm/accounts", method: "GET", writes: false, load: () => import("@/app/api/v1/firm/accounts/route"), expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403) },
   {
     key: "POST /api/v1/firm/invitations",
@@ -548,23 +545,6 @@ async function freshResetToken(): Promise<string> {
   return tokenIn(mail.text, "/reset-password");
 }
 
-function roomBody() {
-  return { name: "Walk room", use: "speech", shape: "shoebox", length: 8, width: 6, height: 3 };
-}
-
-async function freshRoom(): Promise<string> {
-  const { createRoom } = await import("@/lib/services/rooms");
-  const { actorFromHeaders } = await import("@/lib/auth/session");
-  return createRoom(await actorFromHeaders(new Headers({ cookie: cookies.consultant })), projectId, roomBody()).id;
-}
-
-async function freshPin(): Promise<string> {
-  const { createPin } = await import("@/lib/services/boards");
-  const { actorFromHeaders } = await import("@/lib/auth/session");
-  const actor = await actorFromHeaders(new Headers({ cookie: cookies.architect }));
-  return (await createPin(actor, projectId, await freshRoom(), "wall-a", { x: 1, y: 1, body: "A pin to answer" })).id;
-}
-
 // Submittal revisions for the routes that act on one: a fresh issued revision per call (a
 // decision is final), and one approved revision shared by the routes that only read or record.
 let clientName = "";
@@ -594,29 +574,10 @@ function buildUpBody() {
   return { name: "Walk build-up", spec: SPEC, moduleWidth: 0.6, moduleHeight: 1.2, borderX: 0.03, borderY: 0.03 };
 }
 
-// Every exported handler under app/api/v1 must be listed above.
-function routeHandlersOnDisk(): string[] {
-  const root = path.join(process.cwd(), "app", "api", "v1");
-  const found: string[] = [];
-  const walk = (dir: string) => {
-    for (const e of fs.readdirSync(dir, { withFileTypes: true })) {
-      const full = path.join(dir, e.name);
-      if (e.isDirectory()) walk(full);
-      else if (e.name === "route.ts") {
-        const src = fs.readFileSync(full, "utf8");
-        const route = "/" + path.relative(path.join(process.cwd(), "app"), path.dirname(full)).split(path.sep).join("/");
-        for (const m of src.matchAll(/export const (GET|POST|PATCH|PUT|DELETE)\b/g)) found.push(`${m[1]} ${route}`);
-      }
-    }
-  };
-  walk(root);
-  return found.sort();
-}
-
 describe("role walk", () => {
-  it("lists every route handler under app/api/v1", () => {
+  it("lists every route handler under app/api", () => {
     const listed = ENDPOINTS.map((e) => e.key).concat(EXTRA_KEYS).sort();
-    expect(listed).toEqual(routeHandlersOnDisk());
+    expect(listed).toEqual(routeFiles().map((f) => f.key).sort());
   });
 
   for (const endpoint of ENDPOINTS) {
@@ -649,3 +610,41 @@ describe("role walk", () => {
 
 // Routes of later capabilities register their own role walks; their keys are listed here.
 import { EXTRA_KEYS } from "../support/extra-route-keys";
+
+// Without a hand edit, every handler on disk (a later change's too) refuses a request without a
+// session and a signed-in outsider's, and writes nothing for either. Only these answer anyone.
+const PUBLIC = new Set([
+  "GET /api/health",
+  "GET /api/v1/invitations/[token]",
+  // The e-mailed token is the proof for these, not a session.
+  "POST /api/v1/invitations/[token]/account",
+  "POST /api/v1/password-reset",
+  "POST /api/v1/password-reset/[token]",
+]);
+
+describe("every handler on disk, found by reading app/api", () => {
+  for (const file of routeFiles()) {
+    const changes = file.method !== "GET";
+    it(`${file.key}: no session → ${PUBLIC.has(file.key) ? "answered" : "401"}, nothing written`, async () => {
+      const handler = (await file.load())[file.method] as Parameters<typeof call>[0];
+      const params = await paramsFor(file, world);
+      const before = tableCounts();
+      const res = await call(handler, { method: file.method, params, path: pathFor(file.route, params), body: changes ? {} : undefined });
+      if (PUBLIC.has(file.key)) expect(res.status).toBeLessThan(500);
+      else expect(res.status, JSON.stringify(res.json)).toBe(401);
+      if (changes) expect(tableCounts()).toEqual(before);
+    });
+    if (!file.params.includes("projectId")) continue;
+    it(`${file.key}: a signed-in outsider is refused, nothing written`, async () => {
+      const handler = (await file.load())[file.method] as Parameters<typeof call>[0];
+      const params = await paramsFor(file, world);
+      const before = tableCounts();
+      const res = await call(handler, { method: file.method, cookie: cookies.outsider, params, path: pathFor(file.route, params), body: changes ? {} : undefined });
+      // A project the outsider is not in does not exist for them (404); a body they may not
+      // send at all can be refused before that (415 for JSON to an upload).
+      if (changes) expect([403, 404, 415]).toContain(res.status);
+      else expect(res.status).toBe(404);
+      expect(tableCounts()).toEqual(before);
+    });
+  }
+});

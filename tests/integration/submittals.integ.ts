@@ -5,7 +5,7 @@ import { eq } from "drizzle-orm";
 import { useTestEnvironment } from "../support/test-env";
 import { addMember, makeFirm, makeProject, makeUser } from "../support/factories";
 import { call, signIn } from "../support/http";
-import { tableCounts } from "../support/counts";
+import { databaseDigest } from "../support/counts";
 import { waitForMail } from "../support/mail";
 import { pdfPages } from "../support/pdf-text";
 import { actorOf } from "../support/actors";
@@ -103,21 +103,21 @@ describe("issuing revision A", () => {
   });
 
   it("refuses to issue while an item is unconfirmed, naming it, and writes nothing", async () => {
-    const before = tableCounts();
+    const before = databaseDigest();
     const res = await issue("consultant", roomId, { letter: "A", confirm: [] });
     expect(res.status).toBe(409);
     expect(res.json.error.message).toMatch(/Revision A was not issued: confirm these 2 items/);
     expect(res.json.error.issues.map((i: { field: string }) => i.field)).toEqual(["confirm", "confirm"]);
     expect(res.json.error.issues.map((i: { message: string }) => i.message).join(" ")).toMatch(/Pin 1 on Wall A \(length\) is open: "Check the sprinkler head above\."/);
-    expect(tableCounts()).toEqual(before);
+    expect(databaseDigest()).toEqual(before);
   });
 
   it("refuses an architect, a client and an installer (403) and writes nothing", async () => {
     for (const who of ["architect", "client", "installer"]) {
-      const before = tableCounts();
+      const before = databaseDigest();
       const res = await issue(who);
       expect(res.status, who).toBe(403);
-      expect(tableCounts()).toEqual(before);
+      expect(databaseDigest()).toEqual(before);
     }
   });
 
@@ -174,22 +174,22 @@ describe("the client's decision on A", () => {
     ["an approval as noted without notes", { outcome: "approved-as-noted" }, 422, "notes", /notes your approval is subject to/],
     ["a PDF hash that is not the issued one", { pdfSha256: "0".repeat(64) }, 409, "pdfSha256", /not the one issued/],
   ])("refuses %s, naming the field, and changes nothing", async (_what, over, status, field, message) => {
-    const before = tableCounts();
+    const before = databaseDigest();
     const res = await decide(revA, await signed(revA, over));
     expect(res.status).toBe(status);
     expect(res.json.error.issues.find((i: { field: string }) => i.field === field)?.message ?? res.json.error.message).toMatch(message);
-    expect(tableCounts()).toEqual(before);
+    expect(databaseDigest()).toEqual(before);
     expect(rowOf(revA).state).toBe("issued");
   });
 
   it("refuses the consultant (who may not decide their own submittal) and a client of another project", async () => {
-    const before = tableCounts();
+    const before = databaseDigest();
     expect((await decide(revA, await signed(revA), "consultant")).status).toBe(403);
     // A forged request: another project's client naming this project's revision, either way round.
     expect((await decide(revA, await signed(revA), "otherClient")).status).toBe(404);
     const forged = await call((await decisionRoute()).POST, { method: "POST", cookie: cookie.client, params: { projectId: otherProjectId, submittalId: revA }, body: await signed(revA) });
     expect(forged.status).toBe(404);
-    expect(tableCounts()).toEqual(before);
+    expect(databaseDigest()).toEqual(before);
   });
 
   it("returns A with notes: the decision, signer, time and PDF hash recorded, the decision record stored, the consultants told", async () => {
@@ -217,11 +217,11 @@ describe("the client's decision on A", () => {
   });
 
   it("refuses a second decision on A, naming its state", async () => {
-    const before = tableCounts();
+    const before = databaseDigest();
     const res = await decide(revA, await signed(revA));
     expect(res.status).toBe(409);
     expect(res.json.error.message).toMatch(/^Revision A of Hall is already returned for revision \(\d{4}-\d\d-\d\d\); a decision is final\.$/);
-    expect(tableCounts()).toEqual(before);
+    expect(databaseDigest()).toEqual(before);
   });
 });
 
@@ -322,7 +322,7 @@ describe("approval, the shop pack and install progress", () => {
     expect(up.status).toBe(201);
     const { readAttachment } = await import("@/lib/services/attachments");
     const stored = readAttachment(await actorOf(cookie.consultant), projectId, up.json.photo.id);
-    expect(stored.row.mime).toBe("image/jpeg");
+    expect(stored.mime).toBe("image/jpeg");
     expect(hasExif(new Uint8Array(stored.bytes))).toBe(false);
     expect(stored.bytes.includes("FictionalCam")).toBe(false);
 
@@ -342,23 +342,23 @@ describe("approval, the shop pack and install progress", () => {
     const view = (await call((await oneRoute()).GET, { cookie: cookie.installer, params: { projectId, submittalId: revB } })).json;
     const form = new FormData();
     form.set("file", new File([new Uint8Array(await make())], "photo.jpg", { type: "image/jpeg" }));
-    const before = tableCounts();
+    const before = databaseDigest();
     const res = await call((await photoRoute()).POST, { method: "POST", cookie: cookie.installer, params: { projectId, submittalId: revB, placementId: view.install.placements[4].id }, form });
     expect(res.status).toBe(422);
     expect(res.json.error.issues[0]).toMatchObject({ field: "file", message: expect.stringMatching(message) });
-    expect(tableCounts()).toEqual(before);
+    expect(databaseDigest()).toEqual(before);
   });
 
   it("refuses install marks from others, on a panel not in the revision, or with a body that is not a yes or no", async () => {
     const placementId = (await call((await oneRoute()).GET, { cookie: cookie.installer, params: { projectId, submittalId: revB } })).json.install.placements[0].id;
     const put = async (who: string, id: string, body: unknown) => call((await placementRoute()).PUT, { method: "PUT", cookie: cookie[who], params: { projectId, submittalId: revB, placementId: id }, body });
-    const before = tableCounts();
+    const before = databaseDigest();
     expect((await put("consultant", placementId, { installed: false })).status).toBe(403);
     expect((await put("installer", "no-such-panel", { installed: true })).status).toBe(404);
     const bad = await put("installer", placementId, { installed: "yes" });
     expect(bad.status).toBe(422);
     expect(bad.json.error.issues[0].field).toBe("installed");
-    expect(tableCounts()).toEqual(before);
+    expect(databaseDigest()).toEqual(before);
     expect((await put("installer", placementId, { installed: true })).status).toBe(200);
   });
 

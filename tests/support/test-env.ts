@@ -14,6 +14,8 @@ export async function useTestEnvironment(): Promise<{ dataDir: string; mail: Mai
   process.env.CAVITAS_MAIL_HTTP_PORT = String(mail.httpPort);
   process.env.CAVITAS_APP_URL = "http://localhost:3999";
   process.env.BETTER_AUTH_SECRET = "test-secret-".padEnd(48, "x");
+  // One line per request would bury the test output; tests that read the log raise it.
+  process.env.CAVITAS_LOG_LEVEL = "warn";
   return {
     dataDir,
     mail,

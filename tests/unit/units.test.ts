@@ -100,6 +100,13 @@ describe("formatLength", () => {
     expect(formatLength(0.0002, "imperial", { small: true })).toBe("0.008 in");
   });
 
+  it("quotes back an absurd length in a refusal without failing (1e308 m, as a fuzzed request sends)", () => {
+    for (const units of ["metric", "imperial"] as const) {
+      for (const scale of ["fine", "panel", "room"] as const) expect(formatLength(1e308, units, { scale })).toMatch(/\d/);
+    }
+    expect(formatLength(1e12, "imperial")).toBe(`${(1e12 / 0.3048).toFixed(0)} ft`);
+  });
+
   it("formats areas in m² or ft² (1 ft² = 0.09290304 m² exactly)", () => {
     expect(formatArea(24, "metric")).toBe("24 m²");
     expect(formatArea(0.09290304 * 100, "imperial")).toBe("100 ft²");

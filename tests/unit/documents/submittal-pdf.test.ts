@@ -27,10 +27,8 @@ function checkFromRows() {
   const fields = fieldsFromRows(source.room, source.surfaces, source.openings, source.treatments);
   const keyOf = new Map(source.surfaces.map((s) => [s.id, s.key]));
   const surfaces = surfacesFor(fields);
-  const boards = source.boards.map((b) => {
-    const surfaceKey = keyOf.get(b.surfaceId)!;
-    return { surfaceKey, surface: surfaces.find((s) => s.key === surfaceKey)!, placements: source.placements.filter((p) => p.boardId === b.id) };
-  });
+  const shapeOf = new Map(surfaces.map((s) => [s.key, s]));
+  const boards = source.boards.map((b) => ({ surfaceKey: keyOf.get(b.surfaceId)!, surface: shapeOf.get(keyOf.get(b.surfaceId)!)!, placements: source.placements.filter((p) => p.boardId === b.id) }));
   const panels = new Map(source.buildUps.map((b) => [b.id, panelAlphaOf(b)]));
   const { check } = runCheck({ fields, surfaces, treatments: [...fields.treatments, ...treatedArea(boards)], panels, lookup: (key) => source.materials(key)?.alpha });
   if (!check.ok) throw new Error("the demo room's check should run");

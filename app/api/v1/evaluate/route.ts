@@ -1,4 +1,4 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { calculate } from "@/lib/services/calculations";
 
-export const POST = route(({ req, actor }) => calculate(actor, "evaluate", () => readJson(req)));
+export const POST = route(({ json, actor }) => calculate(actor, "evaluate", json));

@@ -1,5 +1,5 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { getMe, updateSettings } from "@/lib/services/settings";
 
 export const GET = route(({ actor }) => getMe(actor));
-export const PATCH = route(async ({ req, actor }) => updateSettings(actor, await readJson(req)));
+export const PATCH = route(async ({ json, actor }) => updateSettings(actor, await json()));

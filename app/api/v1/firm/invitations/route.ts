@@ -1,4 +1,4 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { inviteToFirm } from "@/lib/services/invitations";
 
-export const POST = route(async ({ req, actor }) => Response.json(await inviteToFirm(actor, await readJson(req)), { status: 201 }));
+export const POST = route(async ({ json, actor }) => Response.json(await inviteToFirm(actor, await json()), { status: 201 }));

@@ -1,4 +1,4 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { changePassword } from "@/lib/services/password";
 
-export const POST = route(async ({ req, actor }) => changePassword(actor, await readJson(req)));
+export const POST = route(async ({ json, actor }) => changePassword(actor, await json()));

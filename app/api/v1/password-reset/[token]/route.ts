@@ -1,5 +1,5 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { completePasswordReset } from "@/lib/services/password";
 
 // Set the new password with the e-mailed token (single use, one hour).
-export const POST = route<{ token: string }>(async ({ req, actor, params }) => completePasswordReset(actor, params.token, await readJson(req)));
+export const POST = route<{ token: string }>(async ({ json, actor, params }) => completePasswordReset(actor, params.token, await json()), { public: true });

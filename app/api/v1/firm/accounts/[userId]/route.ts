@@ -1,5 +1,5 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { setAccountDisabled } from "@/lib/services/firm";
 
 // { "disabled": true | false }: a firm administrator disables or re-enables an account.
-export const PATCH = route<{ userId: string }>(async ({ req, actor, params }) => setAccountDisabled(actor, params.userId, await readJson(req)));
+export const PATCH = route<{ userId: string }>(async ({ json, actor, params }) => setAccountDisabled(actor, params.userId, await json()));

@@ -1,4 +1,4 @@
-import { readJson, route } from "@/lib/http/route";
+import { route } from "@/lib/http/route";
 import { resolvePin } from "@/lib/services/boards";
 
-export const POST = route<{ projectId: string; pinId: string }>(async ({ req, actor, params }) => resolvePin(actor, params.projectId, params.pinId, await readJson(req)));
+export const POST = route<{ projectId: string; pinId: string }>(async ({ json, actor, params }) => resolvePin(actor, params.projectId, params.pinId, await json()));
