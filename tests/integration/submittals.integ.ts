@@ -290,7 +290,7 @@ describe("approval, the shop pack and install progress", () => {
   it("gives the installer the shop pack: its bytes hash to the recorded SHA-256, its manifest cites the approved PDF, and the download is audited", async () => {
     const got = await bytesOf((await packRoute()).GET, "installer", { projectId, submittalId: revB });
     expect(got.status).toBe(200);
-    expect(got.headers.get("content-disposition")).toBe(`attachment; filename="${pack.name}"`);
+    expect(got.headers.get("content-disposition")).toBe(`attachment; filename=${pack.name}`);
     expect(sha256(got.bytes)).toBe(pack.sha256);
     const files = unzipSync(got.bytes);
     const pdfHash = await pdfHashOf(cookie.installer, projectId, revB);
