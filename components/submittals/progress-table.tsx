@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { ProjectProgress } from "@/lib/services/submittals";
 import { Sheet } from "@/components/ui/sheet";
+import { TableHead } from "@/components/ui/table-head";
 
 // Install progress of the approved revisions in force, per room and for the project.
 export function ProgressTable({ projectId, progress, linkToInstall }: { projectId: string; progress: ProjectProgress; linkToInstall: boolean }) {
@@ -11,14 +12,7 @@ export function ProgressTable({ projectId, progress, linkToInstall }: { projectI
         <p className="text-sm text-ink-soft">No revision is approved yet, so nothing is being built.</p>
       ) : (
         <table className="w-full text-sm" data-testid="progress-table">
-          <thead>
-            <tr className="border-b border-ink/30 text-left text-xs uppercase tracking-wider text-ink-soft">
-              <th className="py-2 pr-3 font-semibold">Room</th>
-              <th className="py-2 pr-3 font-semibold">Revision</th>
-              <th className="py-2 pr-3 font-semibold">Installed</th>
-              <th className="py-2 text-right font-semibold">Photos</th>
-            </tr>
-          </thead>
+          <TableHead cells={[{ label: "Room" }, { label: "Revision" }, { label: "Installed" }, { label: "Photos", numeric: true }]} />
           <tbody>
             {progress.rooms.map((r) => (
               <tr key={r.submittalId} className="border-b border-ink/10" data-room={r.roomName}>

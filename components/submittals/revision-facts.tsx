@@ -3,6 +3,7 @@ import { formatArea, type UnitPreference } from "@/lib/units";
 import { formatInstant } from "@/lib/documents/format";
 import { StatusBadge } from "@/components/rooms/status-badge";
 import { Sheet } from "@/components/ui/sheet";
+import { TableHead } from "@/components/ui/table-head";
 
 const OUTCOME = { approved: "Approved", "approved-as-noted": "Approved as noted", returned: "Returned for revision" } as const;
 const dot = <span aria-hidden className="mt-2 h-1.5 w-1.5 shrink-0 rounded-full bg-copper" />;
@@ -50,14 +51,7 @@ export function RevisionFacts({ view, units }: { view: SubmittalView; units: Uni
       {view.schedule.length > 0 && (
         <Sheet title="Panel schedule" aside={view.meanAfter && <span className="flex items-center gap-2 text-xs text-ink-soft">mean T after {view.meanAfter.seconds?.toFixed(2) ?? "—"} s <StatusBadge status={view.meanAfter.status} /></span>}>
           <table className="w-full text-sm" data-testid="schedule-table">
-            <thead>
-              <tr className="border-b border-ink/30 text-left text-xs uppercase tracking-wider text-ink-soft">
-                <th className="py-1.5 pr-3 font-semibold">Code</th>
-                <th className="py-1.5 pr-3 font-semibold">Build-up</th>
-                <th className="py-1.5 pr-3 text-right font-semibold">Panels</th>
-                <th className="py-1.5 text-right font-semibold">Area</th>
-              </tr>
-            </thead>
+            <TableHead dense cells={[{ label: "Code" }, { label: "Build-up" }, { label: "Panels", numeric: true }, { label: "Area", numeric: true }]} />
             <tbody>
               {view.schedule.map((r) => (
                 <tr key={r.buildUpId} className="border-b border-ink/10">

@@ -9,6 +9,7 @@ import { formatInstant } from "@/lib/documents/format";
 import { compareRevisions, nextRevisionLetter } from "@/lib/submittals/revision";
 import { Button } from "@/components/ui/button";
 import { Sheet, TitleBlock } from "@/components/ui/sheet";
+import { TableHead } from "@/components/ui/table-head";
 import { IssuePanel } from "./issue-panel";
 import { ProgressTable } from "./progress-table";
 import { StateBadge } from "./state-badge";
@@ -56,14 +57,7 @@ export function SubmittalListView({ projectId, initial }: { projectId: string; i
                 <p className="text-sm text-ink-soft">No revision issued yet.</p>
               ) : (
                 <table className="w-full text-sm" data-testid="revision-table">
-                  <thead>
-                    <tr className="border-b border-ink/30 text-left text-xs uppercase tracking-wider text-ink-soft">
-                      <th className="whitespace-nowrap py-2 pr-3 font-semibold">Revision</th>
-                      <th className="py-2 pr-3 font-semibold">State</th>
-                      <th className="py-2 pr-3 font-semibold">Issued</th>
-                      <th className="py-2 font-semibold">Decided</th>
-                    </tr>
-                  </thead>
+                  <TableHead cells={[{ label: "Revision" }, { label: "State" }, { label: "Issued" }, { label: "Decided" }]} />
                   <tbody>
                     {room.revisions.map((r) => (
                       <tr key={r.id} className="border-b border-ink/10" data-letter={r.letter}>

@@ -22,6 +22,11 @@ export const STATE_WORDS: Record<SubmittalState, string> = {
 
 export const isApproved = (state: SubmittalState) => state === "approved" || state === "approved-as-noted";
 
+/** For what only an approved revision in force allows (a shop pack, install marks): the refusal naming its state. */
+export function requireInForce(row: Submittal, what: string): void {
+  if (!isApproved(row.state) || !row.snapshot) throw conflict(`${revisionName(row)} is ${STATE_WORDS[row.state]}; ${what} an approved revision in force.`, "state");
+}
+
 export function mayOpen(role: ProjectRole, state: SubmittalState): boolean {
   if (role === "consultant" || role === "architect") return true;
   if (role === "client") return state !== "draft";

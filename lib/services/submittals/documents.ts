@@ -3,7 +3,7 @@ import type { SubmittalDocument } from "@/db/schema";
 import { conflict, invalid, notFound } from "@/lib/errors";
 import type { Actor } from "../actor";
 import { recordAudit } from "../audit";
-import { isApproved, openRevision, revisionName, STATE_WORDS } from "./access";
+import { openRevision, requireInForce, revisionName } from "./access";
 import { documentBytes, findDocument } from "./files";
 
 // The stored documents of a revision, byte for byte as they were made: a re-download after the
@@ -30,7 +30,7 @@ export function readShopPack(actor: Actor | null, projectId: string, submittalId
   const access = openRevision(actor, projectId, submittalId, "shop.download");
   const { row } = access;
   if (units !== null && units !== "metric" && units !== "imperial") throw invalid([{ field: "units", message: "Ask for the shop pack in metric or imperial units." }]);
-  if (!isApproved(row.state)) throw conflict(`${revisionName(row)} is ${STATE_WORDS[row.state]}; a shop pack is made only from an approved revision in force.`, "state");
+  requireInForce(row, "a shop pack is made only from");
   const doc = findDocument(row.id, "shop-pack", units ?? access.actor.unitPreference);
   if (!doc) throw notFound("The shop pack");
   transaction((tx) =>

@@ -1,7 +1,7 @@
 import { and, eq, inArray, isNotNull } from "drizzle-orm";
 import { getDb, transaction } from "@/db/client";
 import { attachment, installation, submittal, user, type Installation, type Submittal } from "@/db/schema";
-import { conflict, notFound } from "@/lib/errors";
+import { notFound } from "@/lib/errors";
 import { parseInput } from "@/lib/schemas/parse";
 import { installedSchema } from "@/lib/schemas/submittal";
 import { cleanSitePhoto } from "@/lib/site-photo";
@@ -11,7 +11,7 @@ import type { Actor } from "../actor";
 import { recordAudit } from "../audit";
 import { authorize } from "../guard";
 import { attachmentUrl } from "../attachments";
-import { isApproved, openRevision, revisionName, STATE_WORDS, type RevisionAccess } from "./access";
+import { openRevision, requireInForce, type RevisionAccess } from "./access";
 
 // Install progress: the installer marks the panels of the approved revision in force as
 // installed, each with a site photo if they like; every member sees the progress per room and
@@ -22,8 +22,8 @@ export type InstalledPanel = { placementId: string; code: string; installedAt: s
 function openForInstall(actor: Actor | null, projectId: string, submittalId: string, placementId: string): { access: RevisionAccess; panel: SnapshotPlacement } {
   const access = openRevision(actor, projectId, submittalId, "install.record");
   const { row } = access;
-  if (!isApproved(row.state) || !row.snapshot) throw conflict(`${revisionName(row)} is ${STATE_WORDS[row.state]}; panels are recorded as installed only on the approved revision in force.`, "state");
-  const panel = readSnapshot(row.snapshot).placements.find((p) => p.id === placementId);
+  requireInForce(row, "panels are recorded as installed only on");
+  const panel = readSnapshot(row.snapshot!).placements.find((p) => p.id === placementId);
   if (!panel) throw notFound("Panel");
   return { access, panel };
 }

@@ -8,8 +8,7 @@ import { readSnapshot, type ReadinessItem, type SnapshotPlacement, type Snapshot
 import type { UnitPreference } from "@/lib/units";
 import type { Actor } from "../actor";
 import { authorize } from "../guard";
-import { isApproved, mayOpen, openRevision, revisionName, STATE_WORDS } from "./access";
-import { conflict } from "@/lib/errors";
+import { isApproved, mayOpen, openRevision, requireInForce } from "./access";
 import { nameToSign } from "./decide";
 import { documentsOf } from "./files";
 import { historyOf, type HistoryLine } from "./history";
@@ -194,6 +193,6 @@ export function listShopPacks(actor: Actor | null, projectId: string): { entries
 /** One approved revision in force as the Shop pack screen shows it; any other state is refused, naming it. */
 export function getShopPack(actor: Actor | null, projectId: string, submittalId: string): SubmittalView {
   const { row } = openRevision(actor, projectId, submittalId, "shop.download");
-  if (!isApproved(row.state)) throw conflict(`${revisionName(row)} is ${STATE_WORDS[row.state]}; a shop pack is made only from an approved revision in force.`, "state");
+  requireInForce(row, "a shop pack is made only from");
   return getSubmittal(actor, projectId, submittalId);
 }
