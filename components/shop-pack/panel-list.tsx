@@ -36,14 +36,14 @@ export function PanelList({ surfaceName, panels, units, actions }: { surfaceName
             <div className="flex flex-wrap items-center gap-2">
               {p.photo && (
                 <a href={p.photo.url} target="_blank" rel="noopener" className="text-xs font-semibold text-copper-deep underline-offset-4 hover:underline">
-                  Photo<span className="sr-only"> of {p.code}</span>
+                  Photo<span className="sr-only"> of {p.code} on {surfaceName}</span>
                 </a>
               )}
               {actions && (
                 <>
                   <label className="cursor-pointer rounded-sheet border border-ink/40 px-2.5 py-1.5 text-xs font-medium focus-within:outline focus-within:outline-2 focus-within:outline-copper">
                     {p.photo ? "Replace photo" : "Add photo"}
-                    <span className="sr-only"> of {p.code}</span>
+                    <span className="sr-only"> of {p.code} on {surfaceName}</span>
                     <input
                       type="file"
                       accept="image/jpeg,image/png,image/webp"
@@ -65,7 +65,7 @@ export function PanelList({ surfaceName, panels, units, actions }: { surfaceName
                     className={`rounded-sheet border px-2.5 py-1.5 text-xs font-semibold ${done ? "border-sage bg-sage-soft text-ink" : "border-ink bg-ink text-paper"}`}
                   >
                     {done ? "Installed ✓" : "Mark installed"}
-                    <span className="sr-only"> {p.code}</span>
+                    <span className="sr-only"> {p.code} on {surfaceName}</span>
                   </button>
                 </>
               )}

@@ -1,6 +1,5 @@
 "use client";
 
-import { useState } from "react";
 import type { DocumentLink, SubmittalView } from "@/lib/services/submittals";
 import { Sheet } from "@/components/ui/sheet";
 import { HashText } from "./hash-text";
@@ -51,27 +50,20 @@ export function RevisionDocuments({ view }: { view: SubmittalView }) {
   );
 }
 
-// The issued PDF read on the page, in the browser's own viewer (opened on request: it is a
-// few megabytes of drawing), with a plain link where the browser has no viewer.
+// The issued PDF, opened in the browser's own viewer in a new tab: stored files are never
+// framed inside a page (the app's security policy), and the viewer gives the reader the whole window.
 export function PdfReader({ view }: { view: SubmittalView }) {
-  const [showing, setShowing] = useState(false);
   if (!view.pdf) return null;
   return (
-    <section className="flex flex-col gap-2" aria-label="The submittal PDF">
-      <button type="button" className="self-start rounded-sheet border border-ink/40 bg-white/70 px-3 py-1.5 text-sm font-medium hover:border-copper" aria-expanded={showing} onClick={() => setShowing((s) => !s)}>
-        {showing ? "Hide the PDF" : `Read the PDF of revision ${view.letter} on this page`}
-      </button>
-      {showing && (
-        <object data={view.pdf.url} type="application/pdf" title={`Submittal PDF, revision ${view.letter}`} className="h-[80vh] w-full rounded-sheet border border-ink/25 bg-white">
-          <p className="p-4 text-sm">
-            This browser does not show PDFs inside a page.{" "}
-            <a href={view.pdf.url} target="_blank" rel="noopener" className="font-semibold text-copper-deep underline">
-              Open the submittal PDF
-            </a>{" "}
-            instead.
-          </p>
-        </object>
-      )}
-    </section>
+    <a
+      href={view.pdf.url}
+      target="_blank"
+      rel="noopener"
+      className="inline-flex items-center gap-2 self-start rounded-sheet border border-ink bg-ink px-3.5 py-2 text-sm font-medium text-paper hover:bg-ink-soft"
+      data-testid="read-pdf"
+    >
+      Read the submittal PDF of revision {view.letter}
+      <span className="text-xs font-normal text-paper/80">(opens in a new tab)</span>
+    </a>
   );
 }

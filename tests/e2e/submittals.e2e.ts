@@ -102,8 +102,11 @@ describe("submittals across four accounts", () => {
     const pdfHash = (await page.getByTestId("document-submittal").locator("code").textContent())!;
     const pdf = await fetchBytes(client, (await page.getByTestId("document-submittal").getByRole("link", { name: /^Open/ }).getAttribute("href"))!);
     expect(sha256(pdf)).toBe(pdfHash);
-    await page.getByRole("button", { name: "Read the PDF of revision A on this page" }).click();
-    await page.locator('object[type="application/pdf"]').waitFor();
+    // The PDF opens in the browser's own viewer, in a new tab, at the address of the stored file.
+    const [viewer] = await Promise.all([client.context.waitForEvent("page"), page.getByTestId("read-pdf").click()]);
+    await viewer.waitForLoadState();
+    expect(viewer.url()).toBe(client.url((await page.getByTestId("read-pdf").getAttribute("href"))!));
+    await viewer.close();
     // The signature must be typed: sending without it is refused at its field.
     await page.getByTestId("decision-form").getByLabel(RETURN).check();
     await page.getByTestId("decision-form").getByLabel(/^Notes/).fill("Keep the top row clear of the fire alarm sounder.");
@@ -123,7 +126,7 @@ describe("submittals across four accounts", () => {
     await consultant.goto("/projects");
     await page.getByRole("link", { name: ARTS }).click();
     await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Rooms" }).click();
-    await page.getByRole("link", { name: ROOM }).first().click();
+    await page.getByTestId("rooms-table").getByRole("link", { name: ROOM }).click();
     await page.getByTestId("board-links").getByRole("link", { name: /Wall A/ }).click();
     await page.getByTestId("board-canvas").locator("canvas").first().waitFor();
     await page.getByTestId("board-canvas").focus();
@@ -175,21 +178,23 @@ describe("submittals across four accounts", () => {
 
     await card.getByRole("link", { name: /Panels and progress/ }).click();
     await page.getByTestId("install-count").waitFor();
-    const rows = page.getByTestId("panel-row");
+    // Codes repeat from one board to the next: the panels of wall A are named with their wall.
+    const wallA = page.getByRole("list", { name: "Panels on Wall A (length)" });
+    const rows = wallA.getByTestId("panel-row");
     const codes = await Promise.all([0, 1, 2].map(async (i) => (await rows.nth(i).getAttribute("data-code"))!));
     for (const code of codes) {
-      await page.getByRole("button", { name: `Mark installed ${code}` }).click();
-      await page.locator(`[data-testid="panel-row"][data-code="${code}"][data-installed]`).waitFor();
+      await wallA.getByRole("button", { name: `Mark installed ${code} on Wall A (length)` }).click();
+      await wallA.locator(`[data-testid="panel-row"][data-code="${code}"][data-installed]`).waitFor();
     }
     const photo = path.join(tmp, "site.jpg");
     fs.writeFileSync(photo, await photoWithLocation());
-    await page.getByLabel(`Add photo of ${codes[0]}`).setInputFiles(photo);
-    const link = page.getByRole("link", { name: `Photo of ${codes[0]}` });
+    await wallA.getByLabel(`Add photo of ${codes[0]} on Wall A (length)`).setInputFiles(photo);
+    const link = wallA.getByRole("link", { name: `Photo of ${codes[0]} on Wall A (length)` });
     await link.waitFor();
     const stored = await fetchBytes(installer, (await link.getAttribute("href"))!);
     expect(hasExif(stored)).toBe(false);
     expect(await page.getByTestId("install-count").textContent()).toMatch(/^3 of \d+ panels installed$/);
-    expect(await page.locator('[data-testid^="elevation-"] [data-installed]').count()).toBe(3);
+    expect(await page.locator('[data-testid="elevation-wall-a"] [data-installed]').count()).toBe(3);
     await installer.screenshot("shop-pack-installing");
   });
 
@@ -198,7 +203,8 @@ describe("submittals across four accounts", () => {
     await openSubmittals(consultant);
     expect(await page.getByTestId("progress-table").locator(`tr[data-room="${ROOM}"]`).getByTestId("room-progress").textContent()).toMatch(/^3 of \d+$/);
     await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Rooms" }).click();
-    await page.getByRole("link", { name: ROOM }).first().click();
+    await page.getByTestId("rooms-table").waitFor();
+    await page.getByTestId("rooms-table").getByRole("link", { name: ROOM }).click();
     await page.getByTestId("board-links").getByRole("link", { name: /Wall A/ }).click();
     await page.getByTestId("board-canvas").locator("canvas").first().waitFor();
     expect(await page.getByTestId("installed-note").textContent()).toContain("3 panels are marked installed on site (revision B)");

@@ -8,6 +8,9 @@ export type HistoryLine = { at: string; who: string | null; what: string };
 
 type Detail = Record<string, unknown>;
 
+/** "P-001 on Wall A (length)": codes repeat from one board to the next. */
+const panelName = (d: Detail) => (d.surface ? `${String(d.code)} on ${String(d.surface)}` : String(d.code));
+
 const OUTCOMES: Record<string, string> = { approved: "Approved", "approved-as-noted": "Approved as noted", returned: "Returned for revision" };
 
 function words(action: string, d: Detail): string | null {
@@ -26,9 +29,9 @@ function words(action: string, d: Detail): string | null {
     case "shop-pack.downloaded":
       return `Shop pack downloaded (${String(d.units)}), SHA-256 ${String(d.sha256)}.`;
     case "installation.unmarked":
-      return `${String(d.code)} marked not installed.`;
+      return `${panelName(d)} marked not installed.`;
     case "installation.photo":
-      return `Site photo added to ${String(d.code)}.`;
+      return `Site photo added to ${panelName(d)}.`;
     default:
       return null;
   }
@@ -43,9 +46,9 @@ function groupMarks(events: { at: string; who: string | null; action: string; de
     const last = lines.at(-1);
     if (e.action === "installation.marked") {
       if (last?.codes && last.who === e.who) {
-        last.codes.push(String(e.detail.code));
+        last.codes.push(panelName(e.detail));
         last.at = e.at;
-      } else lines.push({ at: e.at, who: e.who, what: "", codes: [String(e.detail.code)] });
+      } else lines.push({ at: e.at, who: e.who, what: "", codes: [panelName(e.detail)] });
       continue;
     }
     const what = words(e.action, e.detail);

@@ -19,13 +19,15 @@ import { openRevision, requireInForce, type RevisionAccess } from "./access";
 
 export type InstalledPanel = { placementId: string; code: string; installedAt: string | null; installedBy: string | null; photo: { id: string; url: string } | null };
 
-function openForInstall(actor: Actor | null, projectId: string, submittalId: string, placementId: string): { access: RevisionAccess; panel: SnapshotPlacement } {
+function openForInstall(actor: Actor | null, projectId: string, submittalId: string, placementId: string): { access: RevisionAccess; panel: SnapshotPlacement; surface: string } {
   const access = openRevision(actor, projectId, submittalId, "install.record");
   const { row } = access;
   requireInForce(row, "panels are recorded as installed only on");
-  const panel = readSnapshot(row.snapshot!).placements.find((p) => p.id === placementId);
+  const snapshot = readSnapshot(row.snapshot!);
+  const panel = snapshot.placements.find((p) => p.id === placementId);
   if (!panel) throw notFound("Panel");
-  return { access, panel };
+  // Codes are unique per board, not per room: the surface says which P-001 it is.
+  return { access, panel, surface: snapshot.surfaces.find((x) => x.key === panel.surfaceKey)?.name ?? panel.surfaceKey };
 }
 
 function record(submittalId: string, placementId: string): Installation | undefined {
@@ -45,7 +47,7 @@ function view(row: Installation | undefined, panel: SnapshotPlacement, people: M
 const names = () => new Map(getDb().select({ id: user.id, name: user.name }).from(user).all().map((u) => [u.id, u.name]));
 
 export function setInstalled(actor: Actor | null, projectId: string, submittalId: string, placementId: string, raw: unknown): InstalledPanel {
-  const { access, panel } = openForInstall(actor, projectId, submittalId, placementId);
+  const { access, panel, surface } = openForInstall(actor, projectId, submittalId, placementId);
   const { installed } = parseInput(installedSchema, raw);
   transaction((tx) => {
     const values = installed ? { installedAt: new Date(), installedBy: access.actor.userId } : { installedAt: null, installedBy: null };
@@ -53,13 +55,13 @@ export function setInstalled(actor: Actor | null, projectId: string, submittalId
       .values({ projectId, submittalId, placementId, code: panel.code, ...values })
       .onConflictDoUpdate({ target: [installation.submittalId, installation.placementId], set: values })
       .run();
-    recordAudit(tx, { actorId: access.actor.userId, projectId, action: installed ? "installation.marked" : "installation.unmarked", subjectId: submittalId, detail: { code: panel.code, placementId } });
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: installed ? "installation.marked" : "installation.unmarked", subjectId: submittalId, detail: { code: panel.code, surface, placementId } });
   });
   return view(record(submittalId, placementId), panel);
 }
 
 export async function attachSitePhoto(actor: Actor | null, projectId: string, submittalId: string, placementId: string, file: { name: string; bytes: Uint8Array | null }): Promise<InstalledPanel> {
-  const { access, panel } = openForInstall(actor, projectId, submittalId, placementId);
+  const { access, panel, surface } = openForInstall(actor, projectId, submittalId, placementId);
   const clean = await cleanSitePhoto(file.bytes);
   const stored = storeFile(clean.bytes, [clean.kind]);
   const ext = clean.kind === "jpeg" ? "jpg" : clean.kind;
@@ -73,7 +75,7 @@ export async function attachSitePhoto(actor: Actor | null, projectId: string, su
       .values({ projectId, submittalId, placementId, code: panel.code, photoId: photo.id })
       .onConflictDoUpdate({ target: [installation.submittalId, installation.placementId], set: { photoId: photo.id } })
       .run();
-    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "installation.photo", subjectId: submittalId, detail: { code: panel.code, placementId, sha256: stored.sha256, from: file.name.slice(0, 200) } });
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "installation.photo", subjectId: submittalId, detail: { code: panel.code, surface, placementId, sha256: stored.sha256, from: file.name.slice(0, 200) } });
   });
   return view(record(submittalId, placementId), panel);
 }
