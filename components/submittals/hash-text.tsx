@@ -8,7 +8,7 @@ export function HashText({ hash, label, testId }: { hash: string; label: string;
   const [copied, setCopied] = useState(false);
   return (
     <div className="flex items-start gap-2">
-      <code className="figures min-w-0 break-all text-[12px] leading-relaxed text-ink" data-testid={testId} aria-label={`${label}: ${hash}`}>
+      <code className="figures min-w-0 break-all text-[12px] leading-relaxed text-ink" data-testid={testId}>
         {hash}
       </code>
       <button

@@ -146,6 +146,9 @@ describe("issuing revision A", () => {
     expect(text).toContain(row.snapshotSha256!);
     expect(text).toMatch(/Revision\s+A/i);
     for (const p of snapshot.placements) expect(text).toContain(p.code);
+    // … and the check's predicted times after treatment, as the snapshot holds them.
+    for (const o of snapshot.check.octaves) if (o.after) expect(text).toContain(`${o.after.sabine.toFixed(2)} s`);
+    for (const row of snapshot.schedule) expect(text).toContain(row.name);
     expect(snapshot.fire.required).toBe("B-s1,d0");
 
     const [architectMail] = await waitForMail(envHandle.mail, email.architect);
