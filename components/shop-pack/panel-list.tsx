@@ -33,7 +33,7 @@ export function PanelList({ surfaceName, panels, units, actions }: { surfaceName
                 </p>
               )}
             </div>
-            <div className="flex flex-wrap items-center gap-2">
+            <div className="flex flex-wrap items-center gap-2 sm:shrink-0 sm:flex-nowrap">
               {p.photo && (
                 <a href={p.photo.url} target="_blank" rel="noopener" className="text-xs font-semibold text-copper-deep underline-offset-4 hover:underline">
                   Photo<span className="sr-only"> of {p.code} on {surfaceName}</span>
