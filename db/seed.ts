@@ -23,8 +23,10 @@ export const DEMO_ACCOUNTS = [
 
 type Key = (typeof DEMO_ACCOUNTS)[number]["key"];
 
-const ARTS_CENTRE: { name: string; reference: string; site: string; members: [Key, ProjectRole][] } = {
+const ARTS_CENTRE: { name: string; reference: string; site: string; fireRequired?: string; members: [Key, ProjectRole][] } = {
   name: "Lantern Row Arts Centre refit (fictional)",
+  // An invented requirement for the demo, not taken from any code.
+  fireRequired: "B-s1,d0",
   reference: "LRA-24",
   site: "Lantern Row, Eastmere (a fictional town)",
   members: [
@@ -224,7 +226,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
     ] as const) {
       const p = tx
         .insert(project)
-        .values({ firmId: DEMO_FIRM_ID, name: spec.name, reference: spec.reference, site: spec.site, createdBy: ids.consultant })
+        .values({ firmId: DEMO_FIRM_ID, name: spec.name, reference: spec.reference, site: spec.site, fireRequired: spec.fireRequired ?? null, createdBy: ids.consultant })
         .returning()
         .get();
       for (const [key, role] of spec.members) tx.insert(membership).values({ projectId: p.id, userId: ids[key], role }).run();

@@ -9,6 +9,7 @@ export type ErrorCode =
   | "invalid"
   | "too_many"
   | "bad_request"
+  | "failed"
   | "too_large"
   | "unsupported_media";
 
@@ -34,6 +35,9 @@ export const gone = (message: string) => new AppError("gone", message);
 export const invalid = (issues: FieldIssue[], message = "Some fields need attention.") =>
   new AppError("invalid", message, issues);
 
+/** work on our side failed (a document that would not render); the message says what was kept */
+export const failed = (message: string) => new AppError("failed", message);
+
 /** a limit was reached; the message says how long to wait */
 export const tooMany = (message: string) => new AppError("too_many", message);
 export const tooLarge = (limitBytes: number, field?: string) => {
@@ -56,6 +60,7 @@ export const STATUS: Record<ErrorCode, number> = {
   invalid: 422,
   too_many: 429,
   bad_request: 400,
+  failed: 500,
   too_large: 413,
   unsupported_media: 415,
 };

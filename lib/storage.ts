@@ -8,10 +8,10 @@ import { invalid } from "@/lib/errors";
 // claim), size-limited, stored under the data folder by the SHA-256 of the content, so the
 // same file uploaded twice is kept once and a stored file can never be overwritten.
 
-export type UploadKind = "pdf" | "png" | "jpeg" | "webp";
+export type UploadKind = "pdf" | "png" | "jpeg" | "webp" | "zip";
 
-const MIME: Record<UploadKind, string> = { pdf: "application/pdf", png: "image/png", jpeg: "image/jpeg", webp: "image/webp" };
-const EXT: Record<UploadKind, string> = { pdf: "pdf", png: "png", jpeg: "jpg", webp: "webp" };
+const MIME: Record<UploadKind, string> = { pdf: "application/pdf", png: "image/png", jpeg: "image/jpeg", webp: "image/webp", zip: "application/zip" };
+const EXT: Record<UploadKind, string> = { pdf: "pdf", png: "png", jpeg: "jpg", webp: "webp", zip: "zip" };
 
 export function sniff(bytes: Uint8Array): UploadKind | null {
   const starts = (sig: number[], offset = 0) => sig.every((b, i) => bytes[offset + i] === b);
@@ -19,13 +19,14 @@ export function sniff(bytes: Uint8Array): UploadKind | null {
   if (starts([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return "png";
   if (starts([0xff, 0xd8, 0xff])) return "jpeg";
   if (starts([0x52, 0x49, 0x46, 0x46]) && starts([0x57, 0x45, 0x42, 0x50], 8)) return "webp"; // RIFF....WEBP
+  if (starts([0x50, 0x4b, 0x03, 0x04])) return "zip"; // PK\3\4, a local file header
   return null;
 }
 
 export const mimeOf = (kind: UploadKind) => MIME[kind];
 
 // The endings a person may have given each type; any other is replaced or added to.
-const ENDINGS: Record<UploadKind, readonly string[]> = { pdf: ["pdf"], png: ["png"], jpeg: ["jpg", "jpeg", "jpe"], webp: ["webp"] };
+const ENDINGS: Record<UploadKind, readonly string[]> = { pdf: ["pdf"], png: ["png"], jpeg: ["jpg", "jpeg", "jpe"], webp: ["webp"], zip: ["zip"] };
 const KNOWN_ENDINGS = new Set(Object.values(ENDINGS).flat());
 const MAX_NAME = 120;
 
@@ -47,7 +48,7 @@ export function fileNameFor(name: string, kind: UploadKind): string {
   return `${short || "upload"}.${keep}`;
 }
 
-const WORDS: Record<UploadKind, string> = { pdf: "PDF", png: "PNG", jpeg: "JPEG", webp: "WebP" };
+const WORDS: Record<UploadKind, string> = { pdf: "PDF", png: "PNG", jpeg: "JPEG", webp: "WebP", zip: "zip archive" };
 
 export type StoredFile = { sha256: string; kind: UploadKind; mime: string; size: number };
 
@@ -62,6 +63,19 @@ export function storeFile(bytes: Uint8Array, allowed: readonly UploadKind[], fie
     const want = allowed.map((k) => WORDS[k]).join(" or ");
     throw invalid([{ field, message: `This file is not a ${want} (its content was checked, not its name).` }]);
   }
+  return writeContent(bytes, kind);
+}
+
+/**
+ * A document Cavitas made itself (a submittal PDF, a shop pack), stored like an upload but
+ * without the upload limit; its type is still read from its content.
+ */
+export function storeGenerated(bytes: Uint8Array, kind: "pdf" | "zip"): StoredFile {
+  if (sniff(bytes) !== kind) throw new Error(`a generated ${WORDS[kind]} does not start like one`);
+  return writeContent(bytes, kind);
+}
+
+function writeContent(bytes: Uint8Array, kind: UploadKind): StoredFile {
   const sha256 = crypto.createHash("sha256").update(bytes).digest("hex");
   const target = storedPath(sha256, kind);
   if (!fs.existsSync(target)) {

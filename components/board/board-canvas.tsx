@@ -36,6 +36,8 @@ type Props = {
   setOut: BoardRect | null;
   buildUps: ReadonlyMap<string, Facing>;
   breaks: ReadonlyMap<string, RuleBreak[]>;
+  /** panels marked installed on the room's approved revision in force */
+  installed: ReadonlySet<string>;
   guides: readonly SnapGuide[];
   pins: BoardView["pins"];
   focusPin: number | null;
@@ -208,6 +210,7 @@ export default function BoardCanvas(p: Props) {
             facing={p.buildUps.get(pl.buildUpId)}
             selected={p.selected.has(pl.id)}
             broken={p.breaks.get(pl.id)}
+            installed={p.installed.has(pl.id)}
             draggable={p.editable && p.mode === "select"}
             pinMode={p.mode === "pin"}
             onSelect={p.onSelect}

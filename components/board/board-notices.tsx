@@ -2,6 +2,7 @@ import type { BoardIssue } from "@/lib/board/refusal";
 import type { Placement } from "@/lib/board/types";
 import { HIGH_ON_WALL } from "@/lib/board/high-panels";
 import { formatLength, type UnitPreference } from "@/lib/units";
+import type { RoomFire } from "@/lib/fire";
 import { Notice } from "@/components/ui/notice";
 
 /** The words of each field the server can name, as the screen labels it. */
@@ -72,6 +73,25 @@ export function InstallCaution({ kind, high, units, onShow }: { kind: string; hi
         </button>{" "}
         can fall on people below, and fixing them is work at height. Their fixings must be rated for the load and suit the wall, with seismic restraint where required, designed by a competent person (a structural engineer or the maker&apos;s engineered system). Follow the maker&apos;s instructions, safe practice for work at height, and the governing code.
       </p>
+    </Notice>
+  );
+}
+
+// The fire findings of the build-ups on this board that are flagged (missing, lower, not
+// comparable): the same words as the Check and the submittal.
+export function FireFlags({ fire, onBoard }: { fire: RoomFire; onBoard: ReadonlySet<string> }) {
+  const flagged = fire.findings.filter((f) => f.finding.flagged && onBoard.has(f.buildUpId));
+  if (flagged.length === 0) return null;
+  return (
+    <Notice tone="caution" title={`Fire class: ${flagged.length === 1 ? "1 build-up" : `${flagged.length} build-ups`} on this board flagged`}>
+      <ul className="flex flex-col gap-0.5" data-testid="board-fire-flags">
+        {flagged.map((f) => (
+          <li key={f.buildUpId}>
+            <span className="font-semibold">{f.name}:</span> {f.finding.message}
+          </li>
+        ))}
+      </ul>
+      <p className="mt-1">The governing code and the authority having jurisdiction decide what is required.</p>
     </Notice>
   );
 }

@@ -22,7 +22,7 @@ import { SaveNotices } from "@/components/ui/save-notices";
 import type { CanvasMode } from "./board-canvas";
 import { Announcer } from "./board-announcer";
 import { BoardTitle } from "./board-title";
-import { InstallCaution, SaveRefusal } from "./board-notices";
+import { FireFlags, InstallCaution, SaveRefusal } from "./board-notices";
 import { LiveCheck } from "./live-check";
 import { PinComposer } from "./pin-composer";
 import { PinsPanel } from "./pins-panel";
@@ -79,6 +79,8 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
   const setOut = useMemo(() => (selectedList.length ? boundsOf(shownSelection(shown, selected)) : null), [shown, selected, selectedList.length]);
   const high = useMemo(() => panelsHighOnWall(surface.kind, placements), [surface.kind, placements]);
   const openPins = board.pins.filter((p) => !p.resolved).length;
+  const installed = useMemo(() => new Set(board.installed?.placementIds ?? []), [board.installed]);
+  const onBoard = useMemo(() => new Set(placements.map((p) => p.buildUpId)), [placements]);
   const show = useCallback(
     (ids: string[]) => {
       setSelected(new Set(ids));
@@ -102,6 +104,13 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
       <BoardTitle room={room} surfaceKey={initial.surfaceKey} surfaceName={surface.name} save={save} panels={placements.length} openPins={openPins} mayEdit={may.edit} />
       <div className="mb-4 flex flex-col gap-3 empty:hidden">
         <InstallCaution kind={surface.kind} high={high} units={units} onShow={show} />
+        <FireFlags fire={room.fire} onBoard={onBoard} />
+        {board.installed && installed.size > 0 && (
+          <p className="text-xs text-ink-soft" data-testid="installed-note">
+            <span aria-hidden className="mr-1 inline-block h-2.5 w-2.5 rounded-sm border-2 border-sage bg-sage-soft align-middle" />
+            {`${installed.size} ${installed.size === 1 ? "panel is" : "panels are"} marked installed on site (revision ${board.installed.letter}), shown in green with a tick.`}
+          </p>
+        )}
         {save.state === "conflict" ? (
           <SaveNotices what="board" conflict={save.message ?? ""} onReload={reload} error={null} />
         ) : save.failure ? (
@@ -156,6 +165,7 @@ export function BoardScreen({ initial, room, materials, buildUps, units, may, fo
                 setOut={setOut}
                 buildUps={facings}
                 breaks={breaksBy}
+                installed={installed}
                 guides={editor.guides}
                 pins={board.pins}
                 focusPin={pinFocus}

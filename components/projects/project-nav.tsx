@@ -6,17 +6,19 @@ import { usePathname } from "next/navigation";
 type Item = { href: string; label: string };
 
 // The project's own tabs, drawn as a ruled strip under the top bar.
-export function ProjectNav({ projectId, projectName, showDesign }: { projectId: string; projectName: string; showDesign: boolean }) {
+export function ProjectNav({ projectId, projectName, show }: { projectId: string; projectName: string; show: { design: boolean; submittals: boolean; shopPack: boolean } }) {
   const path = usePathname();
   const base = `/projects/${projectId}`;
   const items: Item[] = [
     { href: base, label: "Overview" },
-    ...(showDesign
+    ...(show.design
       ? [
           { href: `${base}/rooms`, label: "Rooms" },
           { href: `${base}/build-ups`, label: "Build-ups" },
         ]
       : []),
+    ...(show.submittals ? [{ href: `${base}/submittals`, label: "Submittals" }] : []),
+    ...(show.shopPack ? [{ href: `${base}/shop-pack`, label: "Shop pack" }] : []),
   ];
   const active = (href: string) => (href === base ? path === base : path.startsWith(href));
   return (

@@ -14,6 +14,7 @@ import { InviteForm } from "./invite-form";
 import { OpenInvitations } from "./open-invitations";
 import { ClearanceForm } from "./clearance-form";
 import { TeamList } from "./team-list";
+import { ProjectFire } from "./project-fire";
 
 export function ProjectOverviewView({ initial, units, myUserId }: { initial: ProjectOverview; units: UnitPreference; myUserId: string }) {
   const { data = initial } = useQuery({ ...projectQuery(initial.project.id), initialData: initial });
@@ -78,8 +79,11 @@ export function ProjectOverviewView({ initial, units, myUserId }: { initial: Pro
             </Sheet>
           ) : (
             <Notice title="Design drafts are not shown to your role">
-              As {ROLE_WORDS[myRole].toLowerCase()} you see this project&apos;s issued submittals; rooms, build-ups and layouts stay with the
-              design team until they are issued.
+              As {ROLE_WORDS[myRole].toLowerCase()} you see this project&apos;s {myRole === "installer" ? "approved" : "issued"} submittals; rooms, build-ups and layouts stay
+              with the design team until they are issued.{" "}
+              <Link href={`/projects/${project.id}/${myRole === "installer" ? "shop-pack" : "submittals"}`} className="font-semibold underline">
+                {myRole === "installer" ? "Open the shop packs" : "Open the submittals"}
+              </Link>
             </Notice>
           )}
           {mayDo.includes("project.edit") && (
@@ -88,6 +92,7 @@ export function ProjectOverviewView({ initial, units, myUserId }: { initial: Pro
               <ClearanceForm projectId={project.id} clearance={project.edgeClearance} units={units} />
             </Sheet>
           )}
+          <ProjectFire projectId={project.id} required={project.fireRequired} mayEdit={mayDo.includes("project.edit")} />
           <Sheet title="What you may do here">
             <ul className="grid gap-1.5 text-sm sm:grid-cols-2" data-testid="may-do">
               {mayDo.map((a) => (

@@ -19,13 +19,14 @@ import { Notice } from "@/components/ui/notice";
 import { RefusalScope, RefusedNotice, useRefusals } from "@/components/ui/refusals";
 import { SaveNotices } from "@/components/ui/save-notices";
 import { TitleBlock } from "@/components/ui/sheet";
+import { RoomFirePanel } from "@/components/fire/room-fire-panel";
 import { CheckPanel } from "./check-panel";
 import { RoomFieldsEditor } from "./room-fields-editor";
 import { SurfacesEditor } from "./surfaces-editor";
 import { TreatmentsEditor } from "./treatments-editor";
 
 function fieldsOf(room: RoomView): RoomFields {
-  const { id: _i, projectId: _p, version: _v, updatedAt: _u, volumeM3: _vol, targetResolved: _t, check: _c, warnings: _w, placed: _pl, openPins: _op, surfaces, ...rest } = room;
+  const { id: _i, projectId: _p, version: _v, updatedAt: _u, volumeM3: _vol, targetResolved: _t, check: _c, warnings: _w, placed: _pl, openPins: _op, fire: _f, surfaces, ...rest } = room;
   return { ...rest, surfaces: surfaces.map(({ grossArea: _g, netArea: _n, ...s }) => s) };
 }
 
@@ -138,6 +139,9 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
           {errors.length} {errors.length === 1 ? "field needs" : "fields need"} attention below. Nothing has been saved or lost.
         </Notice>
       )}
+      <div className="mt-6">
+        <RoomFirePanel room={saved} mayEdit={mayEdit} />
+      </div>
       <RefusalScope refusals={refusals}>
         <fieldset disabled={!mayEdit} data-read-only={mayEdit ? undefined : true} className="mt-8 grid gap-6 xl:grid-cols-[1fr_1.6fr]" data-testid="room-inputs">
           <RoomFieldsEditor draft={draft} onChange={setDraft} units={units} fieldError={fieldError} />

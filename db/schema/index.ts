@@ -11,3 +11,4 @@ export * from "./surface";
 export * from "./build-up";
 export * from "./board";
 export * from "./throttle";
+export * from "./submittal";

@@ -17,6 +17,9 @@ export const project = sqliteTable("project", {
   site: text("site"),
   // Least distance from a panel to a surface edge or an opening, m (elevation board rule).
   edgeClearance: real("edge_clearance").notNull().default(0.05),
+  // The reaction-to-fire or flame spread class the project's rooms require unless a room says
+  // otherwise, as the consultant typed it (lib/fire reads it); null when none is entered.
+  fireRequired: text("fire_required"),
   createdBy: text("created_by").references(() => user.id, { onDelete: "set null" }),
   createdAt: createdAt(),
   updatedAt: updatedAt(),

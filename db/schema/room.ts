@@ -28,6 +28,8 @@ export const room = sqliteTable(
     pressure: real("pressure").notNull().default(101325),
     // The target spec as JSON (lib/rooms/targets.ts schema); null = the default for the use.
     target: text("target"),
+    // The fire class this room requires, overriding the project's; null: the project's applies.
+    fireRequired: text("fire_required"),
     // Optimistic concurrency: every save names the version it started from.
     version: integer("version").notNull().default(1),
     createdAt: createdAt(),

@@ -4,6 +4,7 @@ import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "@/db/seed";
 import { env } from "@/lib/env";
 import { startMailCatcher } from "@/lib/mail/catcher";
 import { buildIsCurrent, nextBin } from "./build-state";
+import { seedDemoSubmittals } from "./demo-submittals";
 import { nextServerArgs } from "./server-args";
 
 // npm run demo | npm run dev: migrate, seed the fictional demo scenario, start the local mail
@@ -13,9 +14,11 @@ const mode = process.argv[2] === "dev" ? "dev" : "demo";
 async function main() {
   const e = env();
   const childEnv = { ...process.env, CAVITAS_APP_URL: e.appUrl, NEXT_TELEMETRY_DISABLED: "1" };
-  const seeded = await seedDemo(getDb());
-  closeDb();
+  // The catcher first, so the demo's own submittal story lands in its inbox.
   const catcher = await startMailCatcher({ smtpPort: e.smtpPort, httpPort: e.mailHttpPort });
+  const seeded = await seedDemo(getDb());
+  if (seeded.created) await seedDemoSubmittals();
+  closeDb();
 
   if (mode === "demo" && !buildIsCurrent()) {
     console.log("Building Cavitas (first run, or the sources changed)…");

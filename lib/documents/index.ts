@@ -9,7 +9,8 @@ export { type DecisionRecordInput, renderDecisionRecordPdf } from "./decision-re
 export { formatters, type UnitPreference } from "./format";
 export { facingPatternSvg } from "./pattern-svg";
 export { cutList, placementRows } from "./quantities";
-export { buildShopPack, type ShopPack, type ShopPackFile } from "./shop-pack";
+export { buildShopPack, documentBaseName, type ShopPack, type ShopPackFile } from "./shop-pack";
 export type { ShopPackInput } from "./shop/context";
 export { renderShopDrawingPdf } from "./shop/document";
 export { renderSubmittalPdf } from "./submittal/document";
+export { changeSentences } from "./change-words";

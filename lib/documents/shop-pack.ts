@@ -5,7 +5,7 @@
  * entry stamped with the approval's time, so the same snapshot and approval give the same zip.
  */
 import { strToU8, zipSync, type Zippable } from "fflate";
-import { sha256Hex } from "@/lib/submittals";
+import { sha256Hex, type SubmittalSnapshot } from "@/lib/submittals";
 import { OUTCOME_WORDS } from "./decision";
 import { cutListCsv, placementScheduleCsv } from "./csv";
 import { formatInstant } from "./format";
@@ -37,6 +37,10 @@ const slug = (text: string) =>
     .replace(/[\s_]+/g, "-")
     .replace(/-+/g, "-") || "room";
 
+/** "LRA-24_rehearsal-room_rev-B": how every file of a revision begins. */
+export const documentBaseName = (s: Pick<SubmittalSnapshot, "project" | "room" | "revision">) =>
+  `${slug(s.project.reference ?? s.project.name)}_${slug(s.room.name)}_rev-${s.revision.letter}`;
+
 /**
  * Zip entries carry DOS time in local components (fflate reads getHours() and friends), so the
  * instant's UTC components are given as local ones: the same stamp whatever the server's zone.
@@ -52,7 +56,7 @@ export async function buildShopPack(input: ShopPackInput): Promise<ShopPack> {
   const c = shopContext(input);
   const { s } = c;
   const units = input.units ?? "metric";
-  const base = `${slug(s.project.reference ?? s.project.name)}_${slug(s.room.name)}_rev-${s.revision.letter}`;
+  const base = documentBaseName(s);
   const file = (name: string, bytes: Uint8Array): ShopPackFile => ({ name, bytes, sha256: sha256Hex(bytes) });
   const files: ShopPackFile[] = [
     file(`${base}_shop-drawing.pdf`, await renderShopDrawingPdf(input)),

@@ -4,3 +4,4 @@
  */
 export * from "./classes";
 export * from "./compare";
+export * from "./required";

@@ -100,3 +100,9 @@ function depthExceeds(value: unknown, max: number): boolean {
   }
   return false;
 }
+
+/** A file field of a multipart body: its name as sent and its bytes, or null bytes when none was sent. */
+export async function uploadedFile(form: FormData, fallbackName: string, field = "file"): Promise<{ name: string; bytes: Uint8Array | null }> {
+  const file = form.get(field);
+  return { name: file instanceof File ? file.name : fallbackName, bytes: file instanceof Blob ? new Uint8Array(await file.arrayBuffer()) : null };
+}

@@ -9,4 +9,6 @@ export const LINKS = {
   resetPassword: (token: string) => appLink(`/reset-password/${encodeURIComponent(token)}`),
   projects: () => appLink("/projects"),
   invitation: (token: string) => appLink(`/invite/${token}`),
+  submittal: (projectId: string, submittalId: string) => appLink(`/projects/${projectId}/submittals/${submittalId}`),
+  shopPack: (projectId: string, submittalId: string) => appLink(`/projects/${projectId}/shop-pack/${submittalId}`),
 };

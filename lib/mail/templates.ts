@@ -114,3 +114,43 @@ export function signedOutEverywhereMail(p: { name: string; count: number; at: Da
     { href: p.resetLink, label: "Set a new password" },
   );
 }
+
+// Submittal messages. Each names the project, the room and the revision, and the SHA-256 that
+// identifies the document, so a reader can tell which file the message is about.
+type RevisionRef = { projectName: string; roomName: string; letter: string };
+const revisionName = (r: RevisionRef) => `${r.roomName}, revision ${r.letter}`;
+
+export function submittalIssuedMail(p: RevisionRef & { consultantName: string; role: ProjectRole; pdfSha256: string; supersedes: string | null; link: string }) {
+  const ask = p.role === "client" ? "Please read it and approve it, approve it as noted, or return it with your notes." : "It is there to read and comment on.";
+  return notice(
+    `Submittal issued: ${revisionName(p)} (${p.projectName})`,
+    [
+      `${p.consultantName} issued revision ${p.letter} of the submittal for ${p.roomName} in "${p.projectName}".${p.supersedes ? ` It supersedes revision ${p.supersedes}.` : ""}`,
+      ask,
+      `The submittal PDF's SHA-256 is ${p.pdfSha256}.`,
+    ],
+    { href: p.link, label: "Open the submittal" },
+  );
+}
+
+export function submittalDecidedMail(p: RevisionRef & { outcome: "approved" | "approved-as-noted" | "returned"; signerName: string; notes: string; link: string }) {
+  const what = { approved: "approved", "approved-as-noted": "approved as noted", returned: "returned for revision" }[p.outcome];
+  const lines = [
+    `${p.signerName} ${what} revision ${p.letter} of the submittal for ${p.roomName} in "${p.projectName}".`,
+    p.notes ? `Their notes: ${p.notes}` : "They added no notes.",
+    p.outcome === "returned" ? "Revise the design and issue the next revision." : "The installer has been sent the shop pack.",
+  ];
+  return notice(`Submittal ${what}: ${revisionName(p)} (${p.projectName})`, lines, { href: p.link, label: "Open the submittal" });
+}
+
+export function shopPackReadyMail(p: RevisionRef & { outcome: "approved" | "approved-as-noted"; notes: string; packName: string; packSha256: string; link: string }) {
+  return notice(
+    `Ready to build: ${revisionName(p)} (${p.projectName})`,
+    [
+      `Revision ${p.letter} of the submittal for ${p.roomName} in "${p.projectName}" was ${p.outcome === "approved" ? "approved" : "approved as noted"}. Its shop pack is ready to download.`,
+      ...(p.outcome === "approved-as-noted" ? [`Build to the client's notes: ${p.notes}`] : []),
+      `The file ${p.packName} has the SHA-256 ${p.packSha256}; check the download against it before you build.`,
+    ],
+    { href: p.link, label: "Open the shop pack" },
+  );
+}

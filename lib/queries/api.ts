@@ -22,6 +22,15 @@ export async function api<T>(path: string, init: { method?: string; body?: unkno
     body: init.body === undefined ? undefined : JSON.stringify(init.body),
     credentials: "same-origin",
   });
+  return answer<T>(res);
+}
+
+/** A multipart upload (files), answered like any other call. */
+export async function postForm<T>(path: string, form: FormData): Promise<T> {
+  return answer<T>(await fetch(path, { method: "POST", body: form, credentials: "same-origin" }));
+}
+
+async function answer<T>(res: Response): Promise<T> {
   const text = await res.text();
   const data = text ? safeJson(text) : null;
   if (!res.ok) {

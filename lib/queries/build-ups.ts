@@ -3,7 +3,7 @@
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
 import type { BuildUpView } from "@/lib/services/build-ups";
 import type { AttachmentSummary } from "@/lib/services/attachments";
-import { api } from "./api";
+import { api, postForm } from "./api";
 import { keys } from "./keys";
 
 const base = (projectId: string) => `/api/v1/projects/${encodeURIComponent(projectId)}/build-ups`;
@@ -49,11 +49,5 @@ export async function uploadFile(projectId: string, purpose: string, file: File)
   const form = new FormData();
   form.set("purpose", purpose);
   form.set("file", file);
-  const res = await fetch(`/api/v1/projects/${encodeURIComponent(projectId)}/attachments`, { method: "POST", body: form });
-  const data = await res.json().catch(() => null);
-  if (!res.ok) {
-    const { ApiError } = await import("./api");
-    throw new ApiError(res.status, data?.error?.message ?? "The upload failed.", data?.error?.issues ?? []);
-  }
-  return data as AttachmentSummary;
+  return postForm<AttachmentSummary>(`/api/v1/projects/${encodeURIComponent(projectId)}/attachments`, form);
 }

@@ -8,4 +8,6 @@ export const keys = {
   buildUps: (projectId: string) => ["projects", projectId, "build-ups"] as const,
   rooms: (projectId: string) => ["projects", projectId, "rooms"] as const,
   room: (projectId: string, roomId: string) => ["projects", projectId, "rooms", roomId] as const,
+  submittals: (projectId: string) => ["projects", projectId, "submittals"] as const,
+  submittal: (projectId: string, id: string) => ["projects", projectId, "submittals", id] as const,
 };

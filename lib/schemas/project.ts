@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { nameField } from "./common";
+import { requiredFireClassField } from "./fire";
 
 export const createProjectSchema = z.object({
   name: nameField,
@@ -18,5 +19,7 @@ export const updateProjectSchema = z
       .number({ error: "Enter the clearance as a length." })
       .refine((v) => Number.isFinite(v) && v >= 0 && v <= 1, { error: "The edge clearance must be between 0 and 1000 mm." })
       .optional(),
+    // The fire class every room of the project requires unless the room names its own.
+    fireRequired: requiredFireClassField.optional(),
   })
   .refine((v) => Object.values(v).some((x) => x !== undefined), { error: "Nothing to change." });

@@ -13,6 +13,7 @@ import type { Actor } from "./actor";
 import { authorize } from "./guard";
 import { recordAudit } from "./audit";
 import { requireAttachment, summarizeAttachment } from "./attachments";
+import { installedOnRoom } from "./submittals/install";
 
 // The elevation board of a surface: panels (placements), review pins with their threads, and
 // a reference drawing. Panels are saved as one document per board with a version.
@@ -42,6 +43,8 @@ export type BoardView = {
   placements: BoardPlacement[];
   pins: PinView[];
   buildUps: { id: string; name: string; facing: EvaluateInput["facing"]; moduleWidth: number; moduleHeight: number; borderX: number; borderY: number }[];
+  /** panels marked installed on the room's approved revision in force, by placement id */
+  installed: { letter: string; submittalId: string; placementIds: string[] } | null;
 };
 
 function loadSurface(projectId: string, roomId: string, surfaceKey: string): SurfaceRow {
@@ -129,6 +132,7 @@ export function getBoard(actor: Actor | null, projectId: string, roomId: string,
       borderX: u.borderX,
       borderY: u.borderY,
     })),
+    installed: installedOnRoom(roomId),
   };
 }
 

@@ -90,7 +90,7 @@ export type RoomSummary = {
 };
 
 export type ProjectOverview = {
-  project: { id: string; name: string; reference: string | null; site: string | null; createdAt: string; edgeClearance: number };
+  project: { id: string; name: string; reference: string | null; site: string | null; createdAt: string; edgeClearance: number; fireRequired: string | null };
   myRole: ProjectRole;
   mayDo: ProjectAction[];
   team: TeamMember[];
@@ -119,6 +119,7 @@ export function getProjectOverview(actor: Actor | null, projectId: string): Proj
       site: access.project.site,
       createdAt: access.project.createdAt.toISOString(),
       edgeClearance: access.project.edgeClearance,
+      fireRequired: access.project.fireRequired,
     },
     myRole: role,
     mayDo: actionsFor(role),
@@ -139,6 +140,7 @@ export function updateProject(actor: Actor | null, projectId: string, raw: unkno
         ...(input.reference !== undefined && { reference: input.reference || null }),
         ...(input.site !== undefined && { site: input.site || null }),
         ...(input.edgeClearance !== undefined && { edgeClearance: input.edgeClearance }),
+        ...(input.fireRequired !== undefined && { fireRequired: input.fireRequired }),
       })
       .where(eq(project.id, projectId))
       .run();

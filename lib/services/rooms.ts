@@ -1,6 +1,8 @@
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { getDb, transaction, type Tx } from "@/db/client";
-import { buildUp, opening, room, surface, treatment, type Room } from "@/db/schema";
+import { buildUp, opening, project, room, surface, treatment, type Room } from "@/db/schema";
+import { roomFire, type BuildUpFire, type RoomFire } from "@/lib/fire";
+import { roomFireSchema } from "@/lib/schemas/fire";
 import { conflict, invalid, notFound } from "@/lib/errors";
 import type { CheckResult } from "@/lib/rooms/check";
 import { netArea, grossArea, roomVolume, type Surface } from "@/lib/rooms/geometry";
@@ -32,6 +34,8 @@ export type RoomView = Omit<RoomFields, "surfaces"> & {
   /** panel area on the elevation boards that counts (inside the surface, net of openings, overlaps once), per surface and build-up */
   placed: { surfaceKey: string; buildUpId: string; area: number }[];
   openPins: number;
+  /** the class the room requires (its own or the project's) against each build-up it uses */
+  fire: RoomFire;
 };
 
 export type RoomSummary = Pick<RoomView, "id" | "name" | "use" | "volumeM3" | "version" | "updatedAt"> & {
@@ -44,6 +48,22 @@ export type RoomSummary = Pick<RoomView, "id" | "name" | "use" | "volumeM3" | "v
 // Each build-up of the project evaluated once per request, for every room that uses it.
 function projectPanels(projectId: string): Map<string, PanelAlpha> {
   return new Map(getDb().select().from(buildUp).where(eq(buildUp.projectId, projectId)).all().map((b) => [b.id, panelAlphaOf(b)]));
+}
+
+// What the fire findings need of the project: its default required class and each build-up's
+// declared class, read once per request.
+type ProjectFire = { required: string | null; buildUps: BuildUpFire[] };
+function projectFire(projectId: string): ProjectFire {
+  const db = getDb();
+  return {
+    required: db.select({ required: project.fireRequired }).from(project).where(eq(project.id, projectId)).get()?.required ?? null,
+    buildUps: db
+      .select({ id: buildUp.id, name: buildUp.name, fireStandard: buildUp.fireStandard, fireClass: buildUp.fireClass })
+      .from(buildUp)
+      .where(eq(buildUp.projectId, projectId))
+      .orderBy(asc(buildUp.name))
+      .all(),
+  };
 }
 
 function loadRoom(projectId: string, roomId: string): Room {
@@ -72,6 +92,7 @@ function view(
   panels: Map<string, PanelAlpha>,
   pins = openPinCounts(row.projectId),
   lookup = materialLookup(row.projectId),
+  fire: ProjectFire = projectFire(row.projectId),
 ): RoomView {
   const surfaces = surfacesFor(fields);
   const bySurface = new Map(surfaces.map((s) => [s.key, s]));
@@ -90,6 +111,10 @@ function view(
     check,
     placed,
     openPins: pins.get(row.id) ?? 0,
+    fire: roomFire(
+      { project: fire.required, room: row.fireRequired },
+      fire.buildUps.filter((b) => fields.treatments.some((t) => t.buildUpId === b.id) || placed.some((p) => p.buildUpId === b.id)),
+    ),
     warnings: [...issues, ...(check.ok ? check.issues.filter((i) => i.severity === "warning") : [])],
   };
 }
@@ -245,4 +270,16 @@ export function deleteRoom(actor: Actor | null, projectId: string, roomId: strin
     recordAudit(tx, { actorId: access.actor.userId, projectId, action: "room.deleted", subjectId: roomId, detail: { name: current.name } });
   });
   return { id: roomId, deleted: true };
+}
+
+// The class this room requires, overriding the project's default; null returns to the default.
+export function setRoomFire(actor: Actor | null, projectId: string, roomId: string, raw: unknown): RoomView {
+  const access = authorize(actor, projectId, "design.edit");
+  const current = loadRoom(projectId, roomId);
+  const { fireRequired } = parseInput(roomFireSchema, raw);
+  transaction((tx) => {
+    tx.update(room).set({ fireRequired }).where(eq(room.id, roomId)).run();
+    recordAudit(tx, { actorId: access.actor.userId, projectId, action: "room.fire-required", subjectId: roomId, detail: { from: current.fireRequired, to: fireRequired } });
+  });
+  return getRoom(actor, projectId, roomId);
 }

@@ -11,7 +11,7 @@ import { MODEL_LIMITS } from "@/lib/acoustics/warnings";
 import { runEvaluate, type EvaluateInput, type EvaluateOutput } from "@/lib/acoustics/contract";
 import { treatedArea } from "@/lib/board/treated-area";
 import { compareLabels } from "@/lib/board/labels";
-import { fireFinding } from "@/lib/fire";
+import { fireFinding, requiredFireClass } from "@/lib/fire";
 import { fieldsFromRows, geometryOf, runCheck, surfacesFor, type PanelAlpha } from "@/lib/room-model";
 import { grossArea, netArea, roomVolume } from "@/lib/rooms/geometry";
 import { octaveAlphaFromBands, type OctaveRecord } from "@/lib/rooms/octaves";
@@ -157,7 +157,7 @@ export function buildSnapshot(source: SnapshotSource): SubmittalSnapshot {
     return m ? [{ key, name: m.name, alpha: { ...m.alpha }, source: m.source ?? "" }] : [];
   });
   const areaTreatments = fields.treatments.map((t) => ({ surfaceKey: t.surfaceKey, buildUpId: t.buildUpId, area: t.area }));
-  const required = source.fire.room?.trim() ? source.fire.room.trim() : source.fire.project?.trim() ? source.fire.project.trim() : null;
+  const { required, from: requiredFrom } = requiredFireClass(source.fire);
   const kindOf = new Map(snapshotSurfaces.map((s) => [s.key, s.kind]));
   const ceilings = surfaceOrder.filter((k) => kindOf.get(k) === "ceiling" && (placements.some((p) => p.surfaceKey === k) || areaTreatments.some((t) => t.surfaceKey === k)));
 
@@ -194,7 +194,7 @@ export function buildSnapshot(source: SnapshotSource): SubmittalSnapshot {
     check: snapshotCheck(check),
     fire: {
       required,
-      requiredFrom: source.fire.room?.trim() ? "room" : required ? "project" : null,
+      requiredFrom,
       findings: buildUps.map((b) => ({ buildUpId: b.id, finding: fireFinding({ standard: b.fire.standard, declared: b.fire.declared, required }) })),
     },
     pins: source.pins

@@ -11,3 +11,4 @@ export * from "./panel-types";
 export * from "./revision";
 export * from "./snapshot";
 export * from "./stored";
+export * from "./readiness";

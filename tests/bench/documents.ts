@@ -14,30 +14,10 @@ import { formatCode } from "@/lib/board/labels";
 import { buildShopPack, renderDecisionRecordPdf, renderSubmittalPdf, type SubmittalDecision } from "@/lib/documents";
 import { buildSnapshot, type SnapshotSource } from "@/lib/submittals";
 import { demoRehearsalSource } from "../support/demo-room";
+import { median, ratio, seconds } from "./timing";
 
 const APPROVAL: SubmittalDecision = { outcome: "approved", signer: { name: "Cleo Client (fictional)" }, decidedAt: "2026-03-05T16:20:00Z", notes: "" };
 const PDF_HASH = "0".repeat(64);
-
-interface Timing {
-  /** ms, wall clock */
-  wall: number;
-  /** ms of this process's CPU: on a shared machine, what the work itself costs */
-  cpu: number;
-}
-
-async function median(runs: number, fn: () => Promise<unknown>): Promise<Timing> {
-  await fn();
-  const times: Timing[] = [];
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    const cpu = process.cpuUsage();
-    await fn();
-    const used = process.cpuUsage(cpu);
-    times.push({ wall: performance.now() - start, cpu: (used.user + used.system) / 1000 });
-  }
-  const mid = (xs: number[]) => xs.sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-  return { wall: mid(times.map((t) => t.wall)), cpu: mid(times.map((t) => t.cpu)) };
-}
 
 /** The demo room with wall A's board replaced by `columns` × `rows` bass panels. */
 function withBoard(source: SnapshotSource, columns: number, rows: number): SnapshotSource {
@@ -50,9 +30,6 @@ function withBoard(source: SnapshotSource, columns: number, rows: number): Snaps
   const placements = rects.map((r, i) => ({ ...template, id: `bench-${i}`, code: formatCode(i + 1), position: i, ...r }));
   return { ...source, placements: [...source.placements.filter((p) => p.boardId !== board.id), ...placements] };
 }
-
-const seconds = (t: Timing) => `${(t.wall / 1000).toFixed(2)} s (CPU ${(t.cpu / 1000).toFixed(2)} s)`;
-const ratio = (a: Timing, b: Timing) => `${(a.wall / b.wall).toFixed(1)}× (CPU ${(a.cpu / b.cpu).toFixed(1)}×)`;
 
 async function main() {
   const load = os.loadavg()[0].toFixed(1);

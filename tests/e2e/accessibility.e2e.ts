@@ -49,6 +49,25 @@ async function designScreens(s: Session, role: string) {
   await check(s, "Bench", role);
 }
 
+// Submittals and the shop pack, on the demo's lecture room (revision A, approved as noted and
+// partly installed by the seed), as each role reaches them.
+async function submittalScreens(s: Session, role: string, shopPack: boolean) {
+  await openProject(s);
+  await s.page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Submittals" }).click();
+  await s.page.getByTestId("submittal-rooms").waitFor();
+  await check(s, "Submittals", role);
+  await s.page.getByRole("link", { name: "Revision A of Lecture room" }).click();
+  await s.page.getByRole("heading", { name: "Lecture room: revision A" }).waitFor();
+  await check(s, "Submittal revision", role);
+  if (!shopPack) return;
+  await s.page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Shop pack" }).click();
+  await s.page.getByTestId("shop-packs").waitFor();
+  await check(s, "Shop pack", role);
+  await s.page.getByRole("link", { name: "Panels and progress of Lecture room" }).click();
+  await s.page.getByTestId("install-count").waitFor();
+  await check(s, "Shop pack: panels and progress", role);
+}
+
 let sessions: Session[] = [];
 async function signedIn(email: string) {
   const s = await Session.open();
@@ -85,6 +104,7 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     const s = await signedIn("consultant@example.test");
     await check(s, "Projects", "consultant");
     await designScreens(s, "consultant");
+    await submittalScreens(s, "consultant", true);
     await s.goto("/settings");
     await check(s, "Settings", "consultant");
   }, ROUND_MS);
@@ -109,6 +129,7 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     const s = await signedIn("architect@example.test");
     await check(s, "Projects", "architect");
     await designScreens(s, "architect");
+    await submittalScreens(s, "architect", false);
     await s.goto("/settings");
     await check(s, "Settings", "architect");
   }, ROUND_MS);
@@ -118,6 +139,7 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await check(s, "Projects", "installer");
     await openProject(s);
     await check(s, "Project overview", "installer");
+    await submittalScreens(s, "installer", true);
     await s.goto("/settings");
     await check(s, "Settings", "installer");
   }, ROUND_MS);
@@ -127,6 +149,7 @@ describe("accessibility of every screen, for every role (axe-core, WCAG 2.2 AA)"
     await check(s, "Projects", "client");
     await openProject(s);
     await check(s, "Project overview", "client");
+    await submittalScreens(s, "client", false);
     await s.goto("/settings");
     await check(s, "Settings", "client");
   }, ROUND_MS);

@@ -78,7 +78,7 @@ const roomWithChildren = (w: RouteWorld) => ({
 });
 const BUILD_UP = { name: "Fuzz build-up", spec: SPEC, moduleWidth: 0.6, moduleHeight: 1.2, borderX: 0.03, borderY: 0.03, facingMaterial: "Birch plywood", fireStandard: "EN 13501-1", fireClass: "B-s1,d0", fireReportId: null, notes: "" };
 const ALPHA = { "125": 0.1, "250": 0.2, "500": 0.3, "1000": 0.4, "2000": 0.5, "4000": 0.6 };
-const TEMPLATES: Record<string, (w: RouteWorld) => unknown> = {
+const TEMPLATES: Record<string, (w: RouteWorld) => unknown | Promise<unknown>> = {
   "PATCH /api/v1/me": () => ({ unitPreference: "imperial", name: "Fuzz person (fictional)" }),
   "POST /api/v1/projects": () => ({ name: "Fuzz project (fictional)", reference: "F-1", site: "Harbour side (fictional)" }),
   "PATCH /api/v1/projects/[projectId]": () => ({ edgeClearance: 0.05, name: "Renamed (fictional)", reference: "F-2", site: "Elsewhere (fictional)" }),
@@ -98,6 +98,11 @@ const TEMPLATES: Record<string, (w: RouteWorld) => unknown> = {
   "POST /api/v1/projects/[projectId]/rooms/[roomId]/boards/[surfaceKey]/pins": () => ({ x: 1, y: 1, body: "Fuzz pin" }),
   "POST /api/v1/projects/[projectId]/pins/[pinId]/replies": () => ({ body: "Fuzz reply" }),
   "POST /api/v1/projects/[projectId]/pins/[pinId]/resolve": () => ({ resolved: true }),
+  "PATCH /api/v1/projects/[projectId]/rooms/[roomId]": () => ({ fireRequired: "B-s1,d0" }),
+  // A room with nothing to confirm, issued as revision A (later runs find A taken: 409).
+  "POST /api/v1/projects/[projectId]/submittals": async (w) => ({ roomId: await freshRoom(w), letter: "A", confirm: [] }),
+  "POST /api/v1/projects/[projectId]/submittals/[submittalId]/decision": () => ({ outcome: "returned", signature: "Fuzz Person", notes: "Fuzz notes", pdfSha256: "0".repeat(64) }),
+  "PUT /api/v1/projects/[projectId]/submittals/[submittalId]/placements/[placementId]": () => ({ installed: true }),
   "POST /api/v1/evaluate": () => SPEC,
   "POST /api/v1/rate": () => ({ alpha: [0.2, 0.4, 0.7, 0.8, 0.7, 0.6] }),
   "POST /api/v1/reverb": () => ({ volume: 240, surfaces: [{ area: 268, alpha: [0.1, 0.1, 0.1, 0.1, 0.1, 0.1] }] }),
@@ -201,7 +206,7 @@ describe("fuzzed bodies, every route that reads one", () => {
         return;
       }
       const params = await paramsFor(file, world);
-      const template = TEMPLATES[file.key]?.(world);
+      const template = await TEMPLATES[file.key]?.(world);
       await fc.assert(
         fc.asyncProperty(bodies(template), async (b) => {
           holds(file, b.note, await send(file, file.params.includes("roomId") || file.params.includes("buildUpId") ? await paramsFor(file, world) : params, b));
@@ -220,7 +225,7 @@ describe("every field of every known body, each replaced by the usual suspects",
   for (const file of files.filter((f) => TEMPLATES[f.key])) {
     it(file.key, async () => {
       const params = await paramsFor(file, world);
-      const template = TEMPLATES[file.key](world);
+      const template = await TEMPLATES[file.key](world);
       const leaves = paths(template).filter((at) => at.length > 0);
       for (const at of leaves) {
         for (const value of SUSPECTS) holds(file, `${at.join(".")} = ${JSON.stringify(value)}`, await send(file, params, json(replaceAt(template, at, value, false), "")));
@@ -240,7 +245,7 @@ describe("fuzzed path parameters, every route", () => {
           // Another project's real id in this project's path must look exactly like no id at all.
           const isForeign = value === "<foreign>";
           const params = { ...valid, [name]: isForeign ? (foreign[name] ?? "x") : value };
-          const template = TEMPLATES[file.key]?.(world);
+          const template = await TEMPLATES[file.key]?.(world);
           const r = await send(file, params, file.method === "GET" || file.method === "DELETE" ? {} : { text: JSON.stringify(template ?? {}), type: "application/json" });
           holds(file, `${name}=${JSON.stringify(params[name]).slice(0, 60)}`, r);
           if (isForeign && foreign[name] && name !== "projectId") expect(r.status, `${file.key} with another project's ${name}`).toBeGreaterThanOrEqual(400);

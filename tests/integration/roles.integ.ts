@@ -7,6 +7,8 @@ import { call, signIn } from "../support/http";
 import { roleMay, type ProjectAction } from "@/lib/permissions";
 import { PROJECT_ROLES, type ProjectRole } from "@/lib/roles";
 import { tableCounts } from "../support/counts";
+import { actorOf } from "../support/actors";
+import { designedRoom, issueConfirmed, pdfHashOf, photoWithLocation } from "../support/submittals";
 import { pathFor, routeFiles } from "../support/route-files";
 import { freshInvitation as inviteIn, freshPin as pinIn, freshRoom as roomIn, paramsFor, walkRoom, type RouteWorld } from "../support/route-world";
 
@@ -35,6 +37,7 @@ beforeAll(async () => {
     addMember(project.id, u.id, role);
     emails[role] = u.email;
     cookies[role] = await signIn(u.email);
+    if (role === "client") clientName = u.name.replace(/\s*\([^)]*\)\s*/g, " ").trim();
   }
   const outsider = await makeUser({ firmId: firm.id });
   emails.outsider = outsider.email;
@@ -327,6 +330,102 @@ const ENDPOINTS: Endpoint[] = [
     prepare: async () => ({ params: { projectId, pinId: await freshPin() }, body: { resolved: true } }),
     expected: projectRule("pin.resolve", 200),
   },
+  {
+    key: "PATCH /api/v1/projects/[projectId]/rooms/[roomId]",
+    method: "PATCH",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() }, body: { fireRequired: "B-s1,d0" } }),
+    expected: projectRule("design.edit", 200),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/rooms/[roomId]/readiness",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/rooms/[roomId]/readiness/route"),
+    prepare: async () => ({ params: { projectId, roomId: await freshRoom() } }),
+    expected: projectRule("submittal.issue", 200),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/submittals",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/submittals/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("submittal.viewIssued", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/submittals",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/submittals/route"),
+    prepare: async () => {
+      const { roomId } = await designedRoom(cookies.consultant, projectId, { panels: 1 });
+      const { issueReadiness } = await import("@/lib/services/submittals");
+      const { letter, items } = issueReadiness(await actorOf(cookies.consultant), projectId, roomId);
+      return { params: { projectId }, body: { roomId, letter, confirm: items.map((i) => i.key) } };
+    },
+    expected: projectRule("submittal.issue", 201),
+  },
+  ...(["", "/pdf", "/decision-record"] as const).map(
+    (sub): Endpoint => ({
+      key: `GET /api/v1/projects/[projectId]/submittals/[submittalId]${sub}`,
+      method: "GET",
+      writes: false,
+      load: () =>
+        sub === "" ? import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/route") : sub === "/pdf" ? import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/pdf/route") : import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/decision-record/route"),
+      prepare: async () => ({ params: { projectId, submittalId: (await approvedRevision()).id } }),
+      // An approved revision: every member may open it and its documents.
+      expected: projectRule("submittal.viewIssued", 200),
+    }),
+  ),
+  {
+    key: "POST /api/v1/projects/[projectId]/submittals/[submittalId]/decision",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/decision/route"),
+    prepare: async () => {
+      const issued = await issuedRevision();
+      return { params: { projectId, submittalId: issued.id }, body: { outcome: "approved", signature: clientName, notes: "", pdfSha256: await pdfHashOf(cookies.consultant, projectId, issued.id) } };
+    },
+    expected: projectRule("submittal.decide", 200),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/submittals/[submittalId]/shop-pack",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/shop-pack/route"),
+    prepare: async () => ({ params: { projectId, submittalId: (await approvedRevision()).id } }),
+    expected: projectRule("shop.download", 200),
+  },
+  {
+    key: "PUT /api/v1/projects/[projectId]/submittals/[submittalId]/placements/[placementId]",
+    method: "PUT",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/placements/[placementId]/route"),
+    prepare: async () => ({ params: await approvedPanel(), body: { installed: true } }),
+    expected: projectRule("install.record", 200),
+  },
+  {
+    key: "POST /api/v1/projects/[projectId]/submittals/[submittalId]/placements/[placementId]/photo",
+    method: "POST",
+    writes: true,
+    load: () => import("@/app/api/v1/projects/[projectId]/submittals/[submittalId]/placements/[placementId]/photo/route"),
+    prepare: async () => {
+      const form = new FormData();
+      form.set("file", new File([await photoWithLocation()], "site.jpg", { type: "image/jpeg" }));
+      return { params: await approvedPanel(), form };
+    },
+    expected: projectRule("install.record", 201),
+  },
+  {
+    key: "GET /api/v1/projects/[projectId]/progress",
+    method: "GET",
+    writes: false,
+    load: () => import("@/app/api/v1/projects/[projectId]/progress/route"),
+    prepare: async () => ({ params: { projectId } }),
+    expected: projectRule("project.view", 200),
+  },
   { key: "GET /api/health", method: "GET", writes: false, load: () => import("@/app/api/health/route"), expected: () => 200 },
   { key: "GET /api/v1/firm/accounts", method: "GET", writes: false, load: () => import("@/app/api/v1/firm/accounts/route"), expected: (who) => (who === "none" ? 401 : who === "admin" ? 200 : 403) },
   {
@@ -444,6 +543,31 @@ async function freshResetToken(): Promise<string> {
   await requestPasswordReset(null, { email: u.email }, `walk-${u.id}`);
   const [mail] = await waitForMail(envHandle.mail, u.email);
   return tokenIn(mail.text, "/reset-password");
+}
+
+// Submittal revisions for the routes that act on one: a fresh issued revision per call (a
+// decision is final), and one approved revision shared by the routes that only read or record.
+let clientName = "";
+async function issuedRevision() {
+  const { roomId } = await designedRoom(cookies.consultant, projectId, { panels: 2 });
+  return issueConfirmed(cookies.consultant, projectId, roomId);
+}
+
+let approved: Promise<{ id: string }> | null = null;
+function approvedRevision() {
+  approved ??= (async () => {
+    const issued = await issuedRevision();
+    const { decideSubmittal } = await import("@/lib/services/submittals");
+    await decideSubmittal(await actorOf(cookies.client), projectId, issued.id, { outcome: "approved", signature: clientName, pdfSha256: await pdfHashOf(cookies.consultant, projectId, issued.id) });
+    return issued;
+  })();
+  return approved;
+}
+
+async function approvedPanel() {
+  const { id } = await approvedRevision();
+  const { getSubmittal } = await import("@/lib/services/submittals");
+  return { projectId, submittalId: id, placementId: getSubmittal(await actorOf(cookies.consultant), projectId, id).install!.placements[0].id };
 }
 
 function buildUpBody() {

@@ -30,6 +30,31 @@ export async function freshInvitation(w: RouteWorld): Promise<{ id: string; toke
   return { id: invitation.id, token };
 }
 
+// One issued submittal revision per world (rendering its PDF takes a second), with a panel of
+// it: the submittal routes' paths need both, and a walk or a fuzz run only needs them to exist.
+const revisions = new WeakMap<RouteWorld, Promise<{ id: string; placementId: string }>>();
+export function issuedRevision(w: RouteWorld): Promise<{ id: string; placementId: string }> {
+  let made = revisions.get(w);
+  if (!made) {
+    made = (async () => {
+      const { saveBoard } = await import("@/lib/services/boards");
+      const { issueReadiness, issueSubmittal } = await import("@/lib/services/submittals");
+      const roomId = await freshRoom(w);
+      const placement = { id: "walk-panel", buildUpId: makeBuildUp(w.projectId).id, code: "P-001", x: 0.5, y: 0.5, width: 0.6, height: 1.2 };
+      saveBoard(w.consultant, w.projectId, roomId, "wall-a", { version: 0, placements: [placement] });
+      const { letter, items } = issueReadiness(w.consultant, w.projectId, roomId);
+      const { id } = await issueSubmittal(w.consultant, w.projectId, { roomId, letter, confirm: items.map((i) => i.key) });
+      const { getDb } = await import("@/db/client");
+      const { submittal } = await import("@/db/schema");
+      const { eq } = await import("drizzle-orm");
+      const snapshot = JSON.parse(getDb().select().from(submittal).where(eq(submittal.id, id)).get()!.snapshot!) as { placements: { id: string }[] };
+      return { id, placementId: snapshot.placements[0].id };
+    })();
+    revisions.set(w, made);
+  }
+  return made;
+}
+
 const MAKERS: Record<string, (w: RouteWorld) => Promise<string> | string> = {
   projectId: (w) => w.projectId,
   roomId: freshRoom,
@@ -40,6 +65,8 @@ const MAKERS: Record<string, (w: RouteWorld) => Promise<string> | string> = {
   invitationId: async (w) => (await freshInvitation(w)).id,
   token: async (w) => (await freshInvitation(w)).token,
   userId: async () => (await makeUser()).id,
+  submittalId: async (w) => (await issuedRevision(w)).id,
+  placementId: async (w) => (await issuedRevision(w)).placementId,
   // Another person's session id: never one of the caller's own, so refusal is what is tested.
   sessionId: () => "no-such-session",
 };

@@ -68,6 +68,7 @@ export function smallRoomSource(): SnapshotSource {
     humidity: 50,
     pressure: 101325,
     target: null,
+    fireRequired: null,
     version: 3,
     createdAt: AT,
     updatedAt: AT,

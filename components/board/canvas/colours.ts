@@ -8,3 +8,5 @@ export const CAUTION = "#c98a12";
 export const PAPER = "#fffdf8";
 export const OPENING_FILL = "#ece5d6";
 export const PIN_RESOLVED = "#566075";
+export const SAGE = "#4f6f52";
+export const SAGE_SOFT = "#d9e4d6";

@@ -1,14 +1,14 @@
 "use client";
 
 import { memo, useMemo, useRef } from "react";
-import { Group, Rect, Shape, Text } from "react-konva";
+import { Group, Line, Rect, Shape, Text } from "react-konva";
 import type Konva from "konva";
 import type { Placement, Rect as BoardRect } from "@/lib/board/types";
 import type { RuleBreak } from "@/lib/board/rules";
 import { panelPattern, visibleDetail } from "@/lib/board/pattern";
 import { toScreen as screenOf, toWorld as worldOf, type View } from "@/lib/board/view";
 import type { BoardView } from "@/lib/services/boards";
-import { CAUTION, COPPER, FAULT, INK } from "./colours";
+import { CAUTION, COPPER, FAULT, INK, SAGE, SAGE_SOFT } from "./colours";
 
 type Facing = BoardView["buildUps"][number];
 const toScreen = (v: View, x: number, y: number) => screenOf(v, { x, y });
@@ -21,6 +21,8 @@ type PanelProps = {
   facing: Facing | undefined;
   selected: boolean;
   broken: RuleBreak[] | undefined;
+  /** marked installed on site: sage fill and a tick, so the consultant sees what is built */
+  installed: boolean;
   draggable: boolean;
   /** placing a pin: a press on the panel goes to the board, which puts the pin there */
   pinMode: boolean;
@@ -32,7 +34,7 @@ type PanelProps = {
 };
 
 // One panel. Memoised on its placement object, so moving one panel redraws one panel.
-export const PanelShape = memo(function PanelShape({ placement: pl, view: v, viewport, facing, selected, broken, draggable, pinMode, onSelect, onDragStart, onDragMove, onDragEnd, dragLayer }: PanelProps) {
+export const PanelShape = memo(function PanelShape({ placement: pl, view: v, viewport, facing, selected, broken, installed, draggable, pinMode, onSelect, onDragStart, onDragMove, onDragEnd, dragLayer }: PanelProps) {
   const home = useRef<Konva.Container | null>(null);
   const a = toScreen(v, pl.x, pl.y + pl.height);
   // A panel refused for a size of nothing still shows as a mark, not a vanished line.
@@ -78,7 +80,7 @@ export const PanelShape = memo(function PanelShape({ placement: pl, view: v, vie
         onDragEnd(pl.id, rect);
       }}
     >
-      <Rect width={w} height={h} fill={selected ? "#f3e3d6" : "#efe9dc"} stroke={stroke} strokeWidth={selected || broken?.length ? 2 : 1} />
+      <Rect width={w} height={h} fill={selected ? "#f3e3d6" : installed ? SAGE_SOFT : "#efe9dc"} stroke={installed && !selected && !broken?.length ? SAGE : stroke} strokeWidth={selected || broken?.length || installed ? 2 : 1} />
       {facing && pattern && (
         <Shape
           listening={false}
@@ -115,6 +117,7 @@ export const PanelShape = memo(function PanelShape({ placement: pl, view: v, vie
         />
       )}
       {w > 34 && h > 16 && <Text x={4} y={4} text={pl.code ?? ""} fontSize={10} fill={INK} listening={false} />}
+      {installed && w > 16 && h > 16 && <Line points={[w - 15, h - 9, w - 11, h - 5, w - 4, h - 13]} stroke={SAGE} strokeWidth={2.5} listening={false} />}
       {broken?.length ? <Text x={w - 14} y={2} text="!" fontSize={13} fontStyle="bold" fill={stroke} listening={false} /> : null}
     </Group>
   );

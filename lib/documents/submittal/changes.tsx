@@ -1,35 +1,11 @@
 import { Text, View } from "@react-pdf/renderer";
-import type { ChangeList, PlacementRef } from "@/lib/submittals";
-import { FIRE_STATUS_WORDS, formatChange, STANDING_WORDS } from "../format";
+import type { ChangeList } from "@/lib/submittals";
+import { fireChangeLines, placementChangeLines, type ScheduleChangeRow, scheduleChangeRows } from "../change-words";
+import { formatChange, STANDING_WORDS } from "../format";
 import { Paragraph, SectionTitle } from "../parts/frame";
 import { Table } from "../parts/table";
 import { styles } from "../theme";
-import { type DocContext, surfaceName } from "./context";
-
-const MAX_CODES = 40;
-
-/** "P-001, P-002 and P-007 on Wall A (length)", at most MAX_CODES codes named per surface. */
-function codesBySurface(c: DocContext, refs: readonly PlacementRef[]): string[] {
-  const bySurface = new Map<string, string[]>();
-  for (const r of refs) bySurface.set(r.surfaceKey, [...(bySurface.get(r.surfaceKey) ?? []), r.code]);
-  return [...bySurface].map(([key, codes]) => {
-    const named = codes.slice(0, MAX_CODES).join(", ");
-    const more = codes.length > MAX_CODES ? ` and ${codes.length - MAX_CODES} more` : "";
-    return `${named}${more} on ${surfaceName(c.s, key)}`;
-  });
-}
-
-type Row = { code: string; name: string; what: string; before: string; after: string };
-
-function scheduleRows(c: DocContext, ch: ChangeList): Row[] {
-  const { f } = c;
-  const brief = (r: { count: number; area: number }) => `${f.count(r.count)} panels, ${f.area(r.area)}`;
-  return [
-    ...ch.schedule.added.map((r) => ({ code: r.code, name: r.name, what: "added", before: "none", after: brief(r) })),
-    ...ch.schedule.removed.map((r) => ({ code: r.code, name: r.name, what: "removed", before: brief(r), after: "none" })),
-    ...ch.schedule.changed.flatMap((r) => r.fields.map((x) => ({ code: r.code, name: r.name, what: x.label, before: formatChange(x.before, x.kind, f), after: formatChange(x.after, x.kind, f) }))),
-  ];
-}
+import type { DocContext } from "./context";
 
 export function Changes(c: DocContext) {
   const ch = c.s.changes;
@@ -42,14 +18,8 @@ export function Changes(c: DocContext) {
     );
   }
   const { f } = c;
-  const rows = scheduleRows(c, ch);
-  const panelLines = [
-    ...codesBySurface(c, ch.placements.added).map((t) => `Added: ${t}.`),
-    ...codesBySurface(c, ch.placements.removed).map((t) => `Removed: ${t}.`),
-    ...codesBySurface(c, ch.placements.changed.filter((p) => p.what.includes("moved"))).map((t) => `Moved: ${t}.`),
-    ...codesBySurface(c, ch.placements.changed.filter((p) => p.what.includes("resized"))).map((t) => `Resized: ${t}.`),
-    ...codesBySurface(c, ch.placements.changed.filter((p) => p.what.includes("build-up"))).map((t) => `Another build-up: ${t}.`),
-  ];
+  const rows = scheduleChangeRows(ch, f);
+  const panelLines = placementChangeLines(c.s, ch);
   return (
     <View>
       <SectionTitle kicker="1  Changes" title={`What changed since revision ${ch.from}`} />
@@ -58,7 +28,7 @@ export function Changes(c: DocContext) {
       {rows.length ? (
         <Table
           columns={[
-            { header: "Code", width: 0.6, cell: (r: Row) => r.code },
+            { header: "Code", width: 0.6, cell: (r: ScheduleChangeRow) => r.code },
             { header: "Build-up", width: 2.2, cell: (r) => r.name },
             { header: "What", width: 1.8, cell: (r) => r.what },
             { header: `Revision ${ch.from}`, width: 1.6, numeric: true, cell: (r) => r.before },
@@ -98,8 +68,8 @@ export function Changes(c: DocContext) {
       {ch.fire.length > 0 && (
         <View>
           <Text style={styles.h3}>Fire findings</Text>
-          {ch.fire.map((x) => (
-            <Paragraph key={x.buildUpId}>{`${x.code} ${x.name}: ${x.before ? FIRE_STATUS_WORDS[x.before] : "not in the schedule"}, now ${x.after ? FIRE_STATUS_WORDS[x.after] : "not in the schedule"}.`}</Paragraph>
+          {fireChangeLines(ch).map((line) => (
+            <Paragraph key={line}>{line}</Paragraph>
           ))}
         </View>
       )}

@@ -73,8 +73,9 @@ export async function startTestServer(opts: { beforeStart?: (databasePath: strin
     // A line per request would bury the test output; errors still show.
     CAVITAS_LOG_LEVEL: process.env.CAVITAS_LOG_LEVEL ?? "warn",
   };
-  // Migrate and seed the demo scenario into the temporary database, as `npm run demo` does.
-  const seeded = spawnSync(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "lib/cli/seed.ts"], { env, stdio: "inherit" });
+  // Migrate and seed the demo scenario into the temporary database, as `npm run demo` does
+  // (the PDF renderer's hyphenation package exports ESM only, hence the import condition).
+  const seeded = spawnSync(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "--conditions=import", "lib/cli/seed.ts"], { env, stdio: "inherit" });
   if (seeded.status !== 0) throw new Error("seeding the e2e database failed");
   await opts.beforeStart?.(databasePath);
   const launch = async () => {

@@ -16,9 +16,14 @@ export default async function ProjectLayout({ children, params }: { children: Re
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;
   }
+  const role = access.membership.role;
   return (
     <>
-      <ProjectNav projectId={projectId} projectName={access.project.name} showDesign={roleMay(access.membership.role, "design.view")} />
+      <ProjectNav
+        projectId={projectId}
+        projectName={access.project.name}
+        show={{ design: roleMay(role, "design.view"), submittals: roleMay(role, "submittal.viewIssued"), shopPack: roleMay(role, "shop.download") }}
+      />
       {children}
     </>
   );
