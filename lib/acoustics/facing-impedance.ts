@@ -6,18 +6,27 @@
  * Eng. J. 29(3), 1987), perforation constant x = (d/2)·sqrt(ωρ0/η):
  *   r  = (32ηt/(ερ0cd²))·[sqrt(1 + x²/32) + (√2/32)·x·d/t]
  *   ωm = (ωt/(εc))·[1 + 1/sqrt(9 + x²/2) + t_end/t]
- * with t_end = 0.85d for micro-perforation (Maa) and t_end = 2δ (Fok, section 0) for ordinary
- * round holes. The end resistance (√2/32)·x·d/t equals R_s/ε, R_s = sqrt(ωρ0η/2).
+ * with t_end = 0.85d for micro-perforation (Maa) and t_end = 2δ (Fok 1941, as used by Melling,
+ * JSV 29(1), 1973) for ordinary round holes. Maa's end resistance (√2/32)·x·d/t equals R_s/ε,
+ * R_s = ½·sqrt(2ηωρ0), and micro-perforation keeps it exactly. Ordinary punched or drilled
+ * holes take 4·R_s/ε, i.e. 2·R_s per face (Ingard, JASA 25(6), 1953; Cox & D'Antonio, Acoustic
+ * Absorbers and Diffusers, 2009, ch. 7; Guo, Allam & Åbom, JSV 2008, for sharp edges): Maa's
+ * R_s/ε under-predicts their measured resistance (Hou & Bolton 2008).
  *
  * Slots: the viscous slit of Stinson (JASA 89(2) 550, 1991), as given by Allard & Atalla,
  * Propagation of Sound in Porous Media (2009): ρ_eff = ρ0 / (1 − tanh(λ)/λ),
  * λ = (w/2)·sqrt(jωρ0/η), in-slit impedance jωρ_eff·t/ε; plus the Smits–Kosten mass end
- * correction 2δ (REFERENCES.md 3.4) and, as for holes, the end resistance R_s/ε.
+ * correction 2δ (Smits & Kosten 1951, as used by Kristiansen & Vigran, Applied Acoustics 43,
+ * 1994) and, as for ordinary holes, the end resistance 4·R_s/ε.
  */
 import type { Air } from "./air";
 import { type Facing, facingEndCorrection, facingOpenArea } from "./build-up";
 
 const NONE = 0;
+/** End resistance in units of R_s/ε: Maa's own for micro-perforation, 2·R_s per face otherwise. */
+export const MAA_END_RESISTANCE = 1;
+export const SHARP_EDGE_END_RESISTANCE = 4;
+
 const HOLES = 1;
 const SLIT = 2;
 
@@ -46,14 +55,15 @@ export class FacingImpedance {
       this.kind = SLIT;
       this.resistance = 0;
       this.shape = (facing.slotWidth / 2) * Math.sqrt(air.rho / air.eta);
-      this.endResistance = Math.sqrt((air.rho * air.eta) / 2) / (air.z0 * eps);
+      this.endResistance = (SHARP_EDGE_END_RESISTANCE * Math.sqrt((air.rho * air.eta) / 2)) / (air.z0 * eps);
       this.endMass = tEnd / (eps * air.c);
     } else {
       const d = facing.holeDiameter;
       this.kind = HOLES;
       this.resistance = (32 * air.eta * t) / (eps * air.z0 * d * d);
       this.shape = (d / 2) * Math.sqrt(air.rho / air.eta);
-      this.endResistance = ((Math.SQRT2 / 32) * d) / t;
+      const ends = facing.kind === "micro-perforated" ? MAA_END_RESISTANCE : SHARP_EDGE_END_RESISTANCE;
+      this.endResistance = (ends * (Math.SQRT2 / 32) * d) / t;
       this.endMass = tEnd / t;
     }
   }

@@ -41,6 +41,12 @@ function endCorrection(b: BuildUp, eps: number): number {
   return 2 * ((8 / (3 * Math.PI)) * (f.holeDiameter / 2) * psi);
 }
 
+/**
+ * End resistance in units of R_s/ε, R_s = ½·sqrt(2ηωρ0): Maa's own for micro-perforation,
+ * 2·R_s per face for ordinary holes and slots (Ingard 1953; Cox & D'Antonio 2009, ch. 7).
+ */
+const endResistanceFactor = (b: BuildUp) => (b.facing.kind === "micro-perforated" ? 1 : 4);
+
 /** Facing impedance normalised by ρc: Maa (holes) or Stinson's slit (slots). */
 function facingZ(b: BuildUp, f: number, a: Air): C {
   const w = 2 * Math.PI * f;
@@ -51,13 +57,15 @@ function facingZ(b: BuildUp, f: number, a: Air): C {
     const lambda = multiply(fc.slotWidth / 2, sqrt(complex(0, (w * a.rho) / a.eta))) as C;
     const F = subtract(ONE, divide(tanh(lambda), lambda)) as C;
     const inSlit = divide(complex(0, (w * fc.thickness) / (eps * a.c)), F) as C;
-    const ends = complex(Math.sqrt((w * a.rho * a.eta) / 2) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c));
+    const rs = 0.5 * Math.sqrt(2 * a.eta * w * a.rho);
+    const ends = complex((endResistanceFactor(b) * rs) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c));
     return add(inSlit, ends) as C;
   }
   const d = fc.holeDiameter;
   const t = fc.thickness;
   const x = (d / 2) * Math.sqrt((w * a.rho) / a.eta);
-  const r = ((32 * a.eta * t) / (eps * a.rho * a.c * d * d)) * (Math.sqrt(1 + (x * x) / 32) + ((Math.SQRT2 / 32) * x * d) / t);
+  const rs = 0.5 * Math.sqrt(2 * a.eta * w * a.rho);
+  const r = ((32 * a.eta * t) / (eps * a.rho * a.c * d * d)) * Math.sqrt(1 + (x * x) / 32) + (endResistanceFactor(b) * rs) / (a.rho * a.c * eps);
   const m = ((w * t) / (eps * a.c)) * (1 + 1 / Math.sqrt(9 + (x * x) / 2) + tEnd / t);
   return complex(r, m);
 }
