@@ -70,7 +70,7 @@ describe("calculation routes", () => {
     const res = await call((await routes.rate()).POST, { method: "POST", cookie: cookies.client, body: rateInput });
     expect(res.status).toBe(200);
     expect(res.json).toMatchObject({ alphaW: 0.4, shape: "LM", class: "D", nrc: 0.65, saa: 0.63 });
-    expect(res.json.alphaP).toEqual({ "250": 0.85, "500": 0.8, "1000": 0.5, "2000": 0.35, "4000": 0.3 });
+    expect(res.json.alphaP).toEqual({ "125": 0.45, "250": 0.85, "500": 0.8, "1000": 0.5, "2000": 0.35, "4000": 0.3 });
   });
 
   it("reverb returns Sabine times per octave close to the worked room example", async () => {

@@ -38,7 +38,7 @@ describe("evaluate", () => {
     expect(out.thirdOctaves.map((b) => b.f)).toEqual([50, 63, 80, 100, 125, 160, 200, 250, 315, 400, 500, 630, 800, 1000, 1250, 1600, 2000, 2500, 3150, 4000, 5000]);
     expect(out.octaves.map((b) => Object.keys(b))).toEqual(Array(7).fill(["f", "diffuse"]));
     expect(Object.keys(out.ratings)).toEqual(["alphaP", "alphaW", "shape", "class", "nrc", "saa"]);
-    expect(Object.keys(out.ratings.alphaP)).toEqual(["250", "500", "1000", "2000", "4000"]);
+    expect(Object.keys(out.ratings.alphaP)).toEqual(["125", "250", "500", "1000", "2000", "4000"]);
     expect(JSON.parse(JSON.stringify(out))).toEqual(out);
     expect(out.openArea).toBeCloseTo(0.0314159, 7);
     expect(out.helmholtzHz).toBeCloseTo(451.6, 1); // T11 P1, Fok [COMPUTED]

@@ -25,7 +25,7 @@ describe("ISO 11654 and ASTM C423 ratings (REFERENCES.md 7.3) [COMPUTED]", () =>
     const r = rateThirdOctaves(thirds(Array(18).fill(1.12)));
     expect(r.nrc).toBe(1.1);
     expect(r.saa).toBe(1.12);
-    expect(Object.values(r.alphaP)).toEqual([1, 1, 1, 1, 1]);
+    expect(Object.values(r.alphaP)).toEqual([1, 1, 1, 1, 1, 1]);
     expect(r.alphaW).toBe(1);
     expect(r.class).toBe("A");
   });
@@ -58,11 +58,24 @@ describe("rounding rules as properties (fast-check)", () => {
     fc.assert(
       fc.property(fc.array(alpha, { minLength: 18, maxLength: 18 }), (values) => {
         const r = rateThirdOctaves(thirds(values));
-        const p = Object.values(r.alphaP).map((v) => Math.round(v * 100));
+        const p = [250, 500, 1000, 2000, 4000].map((label) => Math.round(r.alphaP[String(label)] * 100));
         const sum = (shift: number) => reference.reduce((s, ref, i) => s + Math.max(0, Math.round(ref * 100) + shift - p[i]), 0);
         const shift = Math.round(r.alphaW * 100) - 100;
         expect(sum(shift)).toBeLessThanOrEqual(10);
         if (shift < 0) expect(sum(shift + 5)).toBeGreaterThan(10);
+      }),
+    );
+  });
+
+  it("α_p at 125 Hz is reported from 100, 125 and 160 Hz but moves neither α_w, the shape nor the class (ISO 11654 clause 4)", () => {
+    fc.assert(
+      fc.property(fc.array(alpha, { minLength: 18, maxLength: 18 }), fc.array(alpha, { minLength: 3, maxLength: 3 }), (values, low) => {
+        const r = rateThirdOctaves(thirds(values));
+        const other = rateThirdOctaves(thirds([...low, ...values.slice(3)]));
+        expect([other.alphaW, other.shape, other.class]).toEqual([r.alphaW, r.shape, r.class]);
+        // the mean of three to 0.01 (half up), then to the nearest 0.05, capped at 1
+        const mean = Math.floor((2 * low.reduce((a, v) => a + Math.round(v * 1e6), 0) + 3e4) / 6e4);
+        expect(Math.round(other.alphaP["125"] * 100)).toBe(Math.min(100, 5 * Math.round(mean / 5)));
       }),
     );
   });
