@@ -18,6 +18,8 @@ export interface Peak {
   alpha: number;
   /** true when the maximum is at the upper limit: no peak below c/(4D) */
   atLimit: boolean;
+  /** true when the maximum is at the lower end of the search, c/(4D)/1000: the peak, if any, lies below it */
+  atLowerLimit: boolean;
 }
 
 export function findPeak(model: LayeredModel, upper: number): Peak {
@@ -36,9 +38,10 @@ export function findPeak(model: LayeredModel, upper: number): Peak {
   const a = Math.log(lower) + Math.max(best - 1, 0) * step;
   const b = Math.log(lower) + Math.min(best + 1, GRID - 1) * step;
   const x = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), a, b);
-  if (b - x < 10 * TOLERANCE && best === GRID - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true };
+  if (b - x < 10 * TOLERANCE && best === GRID - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
+  if (x - a < 10 * TOLERANCE && best === 0) return { f: lower, alpha: model.normalAbsorption(lower), atLimit: false, atLowerLimit: true };
   const f = Math.exp(x);
-  return { f, alpha: model.normalAbsorption(f), atLimit: false };
+  return { f, alpha: model.normalAbsorption(f), atLimit: false, atLowerLimit: false };
 }
 
 /** Brent's minimisation of g on [a, b]. */

@@ -45,7 +45,7 @@ export function buildUpWarnings({
   buildUp: BuildUp;
   air: Air;
   helmholtzHz: number;
-  peak: { f: number; atLimit: boolean } | null;
+  peak: { f: number; atLimit: boolean; atLowerLimit: boolean } | null;
   /** highest sample frequency where a negative absorption was set to 0, or null */
   clampedUpToHz: number | null;
 }): Warning[] {
@@ -111,6 +111,12 @@ export function buildUpWarnings({
     out.push({
       code: "no-peak",
       message: `normal-incidence absorption rises up to the quarter-wave frequency c/(4D) = ${hz(peak.f)}: no resonance peak below it, peakHz is that limit`,
+    });
+  }
+  if (peak?.atLowerLimit) {
+    out.push({
+      code: "peak-below-range",
+      message: `normal-incidence absorption is highest at the lower end of the peak search, c/(4D)/1000 = ${hz(peak.f)}: any resonance lies below it and peakHz is that limit, not a peak; the facing's resistance or mass is far outside what panels are made with`,
     });
   }
   return out;

@@ -102,11 +102,15 @@ describe.concurrent("npm run calc", { timeout: 90_000 }, () => {
       "infill.thickness",
       { ...buildUp, infill: { thickness: 0.08, flowResistivity: 10000, position: "on-backing", model: "miki" } },
     ],
+    // legal numbers that once printed 56 nulls with exit 0
+    ["a hole of 1e-300 m", "facing.holeDiameter", { ...buildUp, facing: { ...buildUp.facing, holeDiameter: 1e-300 } }],
+    ["a cavity of 5e-324 m", "cavity.depth", { ...buildUp, cavity: { depth: 5e-324, partitioned: true } }],
   ];
   it.each(bad)("evaluate refuses %s: exit 2, naming %s", async (_, field, input) => {
     const body = refusal(await run(["evaluate", file(input)]));
     expect(body.error).toBe("invalid input");
     expect(body.issues.map((i: { field: string }) => i.field)).toContain(field);
+    expect(body.issues.find((i: { field: string }) => i.field === field).message).toMatch(/must be/);
   });
 
   it("refuses invalid JSON on standard input: exit 2", async () => {

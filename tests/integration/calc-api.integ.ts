@@ -112,10 +112,21 @@ describe("calculation routes", () => {
       { ...evaluateInput, infill: { thickness: 0.08, flowResistivity: 10000, position: "on-backing", model: "miki" } },
       "infill.thickness",
     ],
+    // legal numbers that once answered 200 with 56 nulls
+    ["a hole of 1e-300 m", { ...evaluateInput, facing: { ...evaluateInput.facing, holeDiameter: 1e-300 } }, "facing.holeDiameter"],
+    ["a cavity of 5e-324 m", { ...evaluateInput, cavity: { depth: 5e-324, partitioned: true } }, "cavity.depth"],
   ])("evaluate refuses %s with 400 naming the field", async (_what, body, field) => {
     const res = await call((await routes.evaluate()).POST, { method: "POST", cookie: cookies.consultant, body });
     expect(res.status).toBe(400);
     expect(res.json.error.issues.map((i: { field: string }) => i.field)).toContain(field);
+    expect(JSON.stringify(res.json)).not.toMatch(/null/);
+  });
+
+  it("reverb refuses 200 000 surfaces with 400 naming the list, without reading them one by one", async () => {
+    const surface = { area: 1, alpha: flat(0.1) };
+    const res = await call((await routes.reverb()).POST, { method: "POST", cookie: cookies.consultant, body: { ...reverbInput, surfaces: Array(200_000).fill(surface) } });
+    expect(res.status).toBe(400);
+    expect(res.json.error.issues).toEqual([{ field: "surfaces", message: expect.stringMatching(/at most 2000/) }]);
   });
 
   it("rate refuses an absorption value that is not a number, naming the band", async () => {

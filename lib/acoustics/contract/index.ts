@@ -24,3 +24,6 @@ export {
 } from "./parse";
 export { runAir, runEvaluate, runRate, runResonator, runReverb, toBuildUp, type EvaluateOutput } from "./run";
 export { runContract, type ContractResult } from "./dispatch";
+export { nonFiniteErrors, nonFinitePaths } from "./finite";
+export { LIMITS, type Limit } from "./fields";
+export { MAX_SURFACES } from "./schemas";

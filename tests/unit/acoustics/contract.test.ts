@@ -65,7 +65,7 @@ describe("evaluate", () => {
   });
 
   const refusals: [string, (i: ReturnType<typeof evaluateInput>) => unknown, string, RegExp][] = [
-    ["negative size", (i) => ({ ...i, facing: { ...i.facing, thickness: -0.001 } }), "facing.thickness", /greater than 0/],
+    ["negative size", (i) => ({ ...i, facing: { ...i.facing, thickness: -0.001 } }), "facing.thickness", /at least 0.00005 m \(0.05 mm: a thinner sheet is a film/],
     ["hole as large as the pitch", (i) => ({ ...i, facing: { ...i.facing, holeDiameter: 0.025 } }), "facing.holeDiameter", /smaller than the pitch/],
     [
       "open area outside (0, 1)",
@@ -109,6 +109,15 @@ describe("warnings where a model leaves its validity", () => {
   });
   it("holes too large for Maa's theory", () => {
     expect(warn({ facing: holes(0.002, 0.02, 0.001, "micro-perforated"), cavity: { depth: 0.05, partitioned: true } })).toContain("maa-hole-size");
+  });
+  it("a maximum at the lower end of the peak search, c/(4D)/1000, is warned of, as a missing peak is", () => {
+    // the finest holes on the widest pitch in the thickest plate: all resistance, no resonance
+    const out = runEvaluate(valueOf("evaluate", { facing: holes(0.00005, 0.5, 0.1, "micro-perforated"), cavity: { depth: 0.05, partitioned: true } }));
+    const w = out.warnings.find((x) => x.code === "peak-below-range");
+    expect(w?.message).toMatch(/lower end of the peak search/);
+    // c/(4D)/1000 at 20 °C for D = 50 mm: 343.232/0.2/1000 = 1.716 Hz
+    expect(out.peakHz).toBeCloseTo(1.72, 2);
+    expect(warn({ facing: holes(0.005, 0.025, 0.006), cavity: { depth: 0.05, partitioned: true } })).not.toContain("peak-below-range");
   });
   it("Delany–Bazley outside 0.01 < ρ0f/σ < 1", () => {
     const input = { ...evaluateInput(), infill: { thickness: 0.05, flowResistivity: 30000, position: "on-backing", model: "delany-bazley" } };
