@@ -33,8 +33,8 @@ export function cavityTable(model: LayeredModel, grid: SpectrumGrid): CavityTabl
   for (let k = 0; k < nf; k++) {
     model.setFrequency(frequencies[k]);
     model.impedance();
-    table.normalRe[k] = model.zr - model.facing.zr;
-    table.normalIm[k] = model.zi - model.facing.zi;
+    table.normalRe[k] = model.cavityRe;
+    table.normalIm[k] = model.cavityIm;
     if (!grid.locallyReacting) model.cavityImpedances(q, table.fieldRe, table.fieldIm, k * q.n);
   }
   return table;
@@ -45,12 +45,11 @@ export function fillFromTable(facing: FacingImpedance, table: CavityTable, grid:
   const { frequencies, q, normal, diffuse } = grid;
   for (let k = 0; k < frequencies.length; k++) {
     facing.at(frequencies[k]);
-    const zr = table.normalRe[k] + facing.zr;
-    const zi = table.normalIm[k] + facing.zi;
+    facing.surface(table.normalRe[k], table.normalIm[k]);
+    const zr = facing.sr;
+    const zi = facing.si;
     normal[k] = obliqueAbsorption(zr, zi, 1);
-    diffuse[k] = grid.locallyReacting
-      ? locallyReactingField(zr, zi, q)
-      : fieldSum(table.fieldRe, table.fieldIm, k * q.n, facing.zr, facing.zi, q);
+    diffuse[k] = grid.locallyReacting ? locallyReactingField(zr, zi, q) : fieldSum(table.fieldRe, table.fieldIm, k * q.n, facing, q);
   }
 }
 

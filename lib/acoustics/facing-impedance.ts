@@ -1,6 +1,7 @@
 /**
- * Specific transfer impedance of the facing, normalised by ρ0c (time convention e^{jωt}).
- * Built once per build-up; `at(f)` is the hot path and allocates nothing.
+ * The facing, normalised by ρ0c (time convention e^{jωt}): how it turns the impedance Zb of the
+ * cavity behind it into the surface impedance Zs. Built once per build-up; `at(f)` and
+ * `surface(zb)` are the hot path and allocate nothing.
  *
  * Round holes and micro-perforation: Maa's formula (Maa, JASA 104(5) 2861, 1998; Noise Control
  * Eng. J. 29(3), 1987), perforation constant x = (d/2)·sqrt(ωρ0/η):
@@ -18,38 +19,87 @@
  * λ = (w/2)·sqrt(jωρ0/η), in-slit impedance jωρ_eff·t/ε; plus the Smits–Kosten mass end
  * correction 2δ (Smits & Kosten 1951, as used by Kristiansen & Vigran, Applied Acoustics 43,
  * 1994) and, as for ordinary holes, the end resistance 4·R_s/ε.
+ *
+ * Thin facing (lumped): the in-hole and end terms in series, Zs = Zb + z_in + z_end.
+ * Thick facing (distributed), where k·t' exceeds THICK_FACING_LIMIT at the highest frequency
+ * computed: the holes or slots are a layer of equivalent fluid of porosity ε and thickness t,
+ * with the in-hole effective density of the same in-hole law (ρ_eff = z_in·ε·z0/(jωt)) and the
+ * adiabatic bulk modulus of air ρ0c², so k_h = k0·sqrt(ρ̃), Z_h = sqrt(ρ̃)/ε (ρ̃ = ρ_eff/ρ0); the
+ * end masses and end resistance are series terms, half at each face (Allard & Atalla 2009, ch.
+ * on perforated plates). For k_h·t → 0 it tends to the lumped facing; above, it keeps the
+ * air-column resonances of the holes that the lumped facing misses.
  */
 import type { Air } from "./air";
-import { type Facing, facingEndCorrection, facingOpenArea } from "./build-up";
+import { THIRD_OCTAVES } from "./bands";
+import { type Facing, effectiveThickness, facingEndCorrection, facingOpenArea } from "./build-up";
+import { type Complex, csqrt, ctan } from "./complex";
 
-const NONE = 0;
 /** End resistance in units of R_s/ε: Maa's own for micro-perforation, 2·R_s per face otherwise. */
 export const MAA_END_RESISTANCE = 1;
 export const SHARP_EDGE_END_RESISTANCE = 4;
 
+/** Above k·t' = 0.3 a facing is thick against the wavelength: the lumped series facing errs. */
+export const THICK_FACING_LIMIT = 0.3;
+/** The highest frequency the bands compute: the upper edge of the 5 kHz one-third octave. */
+export const HIGHEST_BAND_FREQUENCY = THIRD_OCTAVES[THIRD_OCTAVES.length - 1].upper;
+
+export type FacingModel = "lumped" | "distributed";
+
+/** k·t' at the highest frequency computed above THICK_FACING_LIMIT: the facing is a distributed layer. */
+export function facingModelFor(facing: Facing, air: Air, highest = HIGHEST_BAND_FREQUENCY): FacingModel {
+  return ((2 * Math.PI * highest) / air.c) * effectiveThickness(facing) > THICK_FACING_LIMIT ? "distributed" : "lumped";
+}
+
+const NONE = 0;
 const HOLES = 1;
 const SLIT = 2;
 
 export class FacingImpedance {
-  /** normalised resistance and reactance after `at(f)` */
+  /** lumped: the series impedance after `at(f)` (also its lumped equivalent when distributed) */
   zr = 0;
   zi = 0;
+  /** the surface impedance after `surface(zb)` */
+  sr = 0;
+  si = 0;
+  readonly model: FacingModel;
+  /** distributed: Zs = (A·Zb + B)/(C·Zb + A) after `at(f)` */
+  ar = 1;
+  ai = 0;
+  br = 0;
+  bi = 0;
+  cr = 0;
+  ci = 0;
   private readonly kind: number;
   private readonly resistance: number;
   private readonly shape: number;
   private readonly endResistance: number;
   private readonly mass: number;
   private readonly endMass: number;
+  private readonly openArea: number;
+  private readonly thickness: number;
+  private readonly c: number;
+  // in-hole and end terms of the current frequency
+  private inR = 0;
+  private inI = 0;
+  private endR = 0;
+  private endI = 0;
+  private readonly scratch: Complex = { re: 0, im: 0 };
+  private readonly tan: Complex = { re: 0, im: 0 };
 
-  constructor(facing: Facing | null, air: Air) {
+  constructor(facing: Facing | null, air: Air, model?: FacingModel) {
+    this.c = air.c;
     if (!facing) {
       this.kind = NONE;
-      this.resistance = this.shape = this.endResistance = this.mass = this.endMass = 0;
+      this.model = "lumped";
+      this.resistance = this.shape = this.endResistance = this.mass = this.endMass = this.openArea = this.thickness = 0;
       return;
     }
     const eps = facingOpenArea(facing);
     const t = facing.thickness;
     const tEnd = facingEndCorrection(facing);
+    this.model = model ?? facingModelFor(facing, air);
+    this.openArea = eps;
+    this.thickness = t;
     this.mass = t / (eps * air.c);
     if (facing.kind === "slots") {
       this.kind = SLIT;
@@ -72,14 +122,68 @@ export class FacingImpedance {
     const w = 2 * Math.PI * f;
     if (this.kind === HOLES) {
       const x = this.shape * Math.sqrt(w);
-      this.zr = this.resistance * (Math.sqrt(1 + (x * x) / 32) + this.endResistance * x);
-      this.zi = w * this.mass * (1 + 1 / Math.sqrt(9 + (x * x) / 2) + this.endMass);
+      this.inR = this.resistance * Math.sqrt(1 + (x * x) / 32);
+      this.inI = w * this.mass * (1 + 1 / Math.sqrt(9 + (x * x) / 2));
+      this.endR = this.resistance * this.endResistance * x;
+      this.endI = w * this.mass * this.endMass;
     } else if (this.kind === SLIT) {
       this.slit(w);
     } else {
-      this.zr = 0;
-      this.zi = 0;
+      this.inR = this.inI = this.endR = this.endI = 0;
     }
+    this.zr = this.inR + this.endR;
+    this.zi = this.inI + this.endI;
+    if (this.model === "distributed" && this.kind !== NONE) this.layer(w);
+  }
+
+  /** Zs from the impedance Zb of what lies behind the facing, into sr, si. */
+  surface(zbr: number, zbi: number): void {
+    if (this.model === "lumped") {
+      this.sr = zbr + this.zr;
+      this.si = zbi + this.zi;
+      return;
+    }
+    const nr = this.ar * zbr - this.ai * zbi + this.br;
+    const ni = this.ar * zbi + this.ai * zbr + this.bi;
+    const dr = this.cr * zbr - this.ci * zbi + this.ar;
+    const di = this.cr * zbi + this.ci * zbr + this.ai;
+    const g = 1 / (dr * dr + di * di);
+    this.sr = g * (nr * dr + ni * di);
+    this.si = g * (ni * dr - nr * di);
+  }
+
+  /**
+   * The holes as a layer of thickness t between half the end terms e at each face:
+   * Zs = e + Z_h·(Zb + e + j Z_h T)/(Z_h + j (Zb + e) T), T = tan(k_h t), which is the Möbius map
+   * A = Z_h + j e T, B = 2 e Z_h + j T (Z_h² + e²), C = j T, D = A.
+   */
+  private layer(w: number): void {
+    const q = (w * this.thickness) / this.c;
+    const eps = this.openArea;
+    // ρ̃ = z_in·ε/(j q)
+    const s = this.scratch;
+    csqrt((this.inI * eps) / q, (-this.inR * eps) / q, s);
+    const zhr = s.re / eps;
+    const zhi = s.im / eps;
+    ctan(q * s.re, q * s.im, this.tan);
+    const tr = this.tan.re;
+    const ti = this.tan.im;
+    const er = 0.5 * this.endR;
+    const ei = 0.5 * this.endI;
+    // e·T and j·e·T
+    const etr = er * tr - ei * ti;
+    const eti = er * ti + ei * tr;
+    this.ar = zhr - eti;
+    this.ai = zhi + etr;
+    // Z_h² + e², times j T
+    const pr = zhr * zhr - zhi * zhi + er * er - ei * ei;
+    const pi = 2 * (zhr * zhi + er * ei);
+    const jtr = -ti;
+    const jti = tr;
+    this.br = 2 * (er * zhr - ei * zhi) + (jtr * pr - jti * pi);
+    this.bi = 2 * (er * zhi + ei * zhr) + (jtr * pi + jti * pr);
+    this.cr = jtr;
+    this.ci = jti;
   }
 
   private slit(w: number): void {
@@ -110,15 +214,16 @@ export class FacingImpedance {
     // jω·mass / F
     const wm = w * this.mass;
     const inv = wm / (fr * fr + fi * fi);
-    const sw = Math.sqrt(w);
-    this.zr = inv * fi + this.endResistance * sw;
-    this.zi = inv * fr + w * this.endMass;
+    this.inR = inv * fi;
+    this.inI = inv * fr;
+    this.endR = this.endResistance * Math.sqrt(w);
+    this.endI = w * this.endMass;
   }
 }
 
-/** Normalised facing impedance at one frequency (for checks and the interface). */
+/** Normalised lumped (series) facing impedance at one frequency (for checks and the interface). */
 export function facingImpedance(facing: Facing, f: number, air: Air): { re: number; im: number } {
-  const model = new FacingImpedance(facing, air);
+  const model = new FacingImpedance(facing, air, "lumped");
   model.at(f);
   return { re: model.zr, im: model.zi };
 }

@@ -6,7 +6,8 @@
  * With a rigid backing the product matrix only matters through Zs = T11/T21, so the layers are
  * applied from the backing forwards as impedance translations, which is the same algebra with
  * fewer operations: the back layer gives −j Zz cot(kz d); each layer in front of a load Zb gives
- * Zz (Zb + j Zz tan(kz d)) / (Zz + j Zb tan(kz d)); the facing adds its impedance in series.
+ * Zz (Zb + j Zz tan(kz d)) / (Zz + j Zb tan(kz d)); the facing turns the cavity's Zb into Zs
+ * (in series when thin, as a layer of its own when thick: facing-impedance.ts).
  * Oblique incidence at trace wavenumber k0 sinθ: air kz = k0 cosθ, Zz = ρ0c/cosθ; porous
  * kz = sqrt(kc² − k0² sin²θ), Zz = Zc kc/kz.
  *
@@ -15,7 +16,7 @@
  */
 import type { Air } from "./air";
 import type { Facing, Layer } from "./build-up";
-import { FacingImpedance } from "./facing-impedance";
+import { FacingImpedance, type FacingModel } from "./facing-impedance";
 import type { Quadrature } from "./incidence";
 import { porousCharacteristics } from "./porous";
 
@@ -27,6 +28,9 @@ export class LayeredModel {
   /** normalised surface impedance at normal incidence after `impedance()` */
   zr = 0;
   zi = 0;
+  /** the cavity's own impedance at normal incidence after `impedance()` */
+  cavityRe = 0;
+  cavityIm = 0;
   readonly facing: FacingImpedance;
   private readonly count: number;
   private readonly layers: Layer[];
@@ -39,12 +43,12 @@ export class LayeredModel {
   private re = new Float64Array(16);
   private im = new Float64Array(16);
 
-  constructor(facing: Facing | null, layers: Layer[], air: Air) {
+  constructor(facing: Facing | null, layers: Layer[], air: Air, facingModel?: FacingModel) {
     this.layers = layers.filter((layer) => layer.thickness > 0);
     this.count = this.layers.length;
     this.thickness = Float64Array.from(this.layers, (layer) => layer.thickness);
     this.fluid = new Float64Array(4 * this.count);
-    this.facing = new FacingImpedance(facing, air);
+    this.facing = new FacingImpedance(facing, air, facingModel);
     this.rho = air.rho;
     this.c = air.c;
   }
@@ -64,8 +68,11 @@ export class LayeredModel {
   /** Normal-incidence surface impedance into zr, zi. */
   impedance(): void {
     this.layerImpedances(NORMAL_COS, NORMAL_SIN2, 1);
-    this.zr = this.re[0] + this.facing.zr;
-    this.zi = this.im[0] + this.facing.zi;
+    this.cavityRe = this.re[0];
+    this.cavityIm = this.im[0];
+    this.facing.surface(this.cavityRe, this.cavityIm);
+    this.zr = this.facing.sr;
+    this.zi = this.facing.si;
   }
 
   /** Normal-incidence absorption at f. */
@@ -79,7 +86,7 @@ export class LayeredModel {
   /** Extended reaction: field-incidence absorption with every layer at each angle. */
   fieldAbsorption(q: Quadrature): number {
     this.layerImpedances(q.cos, q.sin2, q.n);
-    return fieldSum(this.re, this.im, 0, this.facing.zr, this.facing.zi, q);
+    return fieldSum(this.re, this.im, 0, this.facing, q);
   }
 
   /** The cavity alone (no facing) at the angles of q, copied into re, im from offset. */
@@ -189,15 +196,27 @@ export class LayeredModel {
 }
 
 /**
- * Σ weight·α(θ) over the angles of q for layer impedances re, im (from offset) in series with
- * a facing impedance fr + j fi.
+ * Σ weight·α(θ) over the angles of q for cavity impedances re, im (from offset) behind the
+ * facing (after its `at(f)`).
  */
-export function fieldSum(re: Float64Array, im: Float64Array, offset: number, fr: number, fi: number, q: Quadrature): number {
+export function fieldSum(re: Float64Array, im: Float64Array, offset: number, facing: FacingImpedance, q: Quadrature): number {
   let sum = 0;
+  if (facing.model === "lumped") {
+    const fr = facing.zr;
+    const fi = facing.zi;
+    for (let j = 0; j < q.n; j++) {
+      const c = q.cos[j];
+      const a = (re[offset + j] + fr) * c;
+      const b = (im[offset + j] + fi) * c;
+      sum += (q.weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
+    }
+    return sum;
+  }
   for (let j = 0; j < q.n; j++) {
+    facing.surface(re[offset + j], im[offset + j]);
     const c = q.cos[j];
-    const a = (re[offset + j] + fr) * c;
-    const b = (im[offset + j] + fi) * c;
+    const a = facing.sr * c;
+    const b = facing.si * c;
     sum += (q.weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
   }
   return sum;

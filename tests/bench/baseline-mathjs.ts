@@ -47,8 +47,8 @@ function endCorrection(b: BuildUp, eps: number): number {
  */
 const endResistanceFactor = (b: BuildUp) => (b.facing.kind === "micro-perforated" ? 1 : 4);
 
-/** Facing impedance normalised by ρc: Maa (holes) or Stinson's slit (slots). */
-function facingZ(b: BuildUp, f: number, a: Air): C {
+/** The facing's in-hole (or in-slit) and end impedances, normalised by ρc: Maa (holes) or Stinson's slit (slots). */
+function facingParts(b: BuildUp, f: number, a: Air): { inHole: C; ends: C } {
   const w = 2 * Math.PI * f;
   const eps = openArea(b);
   const tEnd = endCorrection(b, eps);
@@ -58,16 +58,38 @@ function facingZ(b: BuildUp, f: number, a: Air): C {
     const F = subtract(ONE, divide(tanh(lambda), lambda)) as C;
     const inSlit = divide(complex(0, (w * fc.thickness) / (eps * a.c)), F) as C;
     const rs = 0.5 * Math.sqrt(2 * a.eta * w * a.rho);
-    const ends = complex((endResistanceFactor(b) * rs) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c));
-    return add(inSlit, ends) as C;
+    return { inHole: inSlit, ends: complex((endResistanceFactor(b) * rs) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c)) };
   }
   const d = fc.holeDiameter;
   const t = fc.thickness;
   const x = (d / 2) * Math.sqrt((w * a.rho) / a.eta);
   const rs = 0.5 * Math.sqrt(2 * a.eta * w * a.rho);
-  const r = ((32 * a.eta * t) / (eps * a.rho * a.c * d * d)) * Math.sqrt(1 + (x * x) / 32) + (endResistanceFactor(b) * rs) / (a.rho * a.c * eps);
-  const m = ((w * t) / (eps * a.c)) * (1 + 1 / Math.sqrt(9 + (x * x) / 2) + tEnd / t);
-  return complex(r, m);
+  const r = ((32 * a.eta * t) / (eps * a.rho * a.c * d * d)) * Math.sqrt(1 + (x * x) / 32);
+  const m = ((w * t) / (eps * a.c)) * (1 + 1 / Math.sqrt(9 + (x * x) / 2));
+  return { inHole: complex(r, m), ends: complex((endResistanceFactor(b) * rs) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c)) };
+}
+
+/**
+ * The facing as a 2×2 matrix. Thin (k·t' ≤ 0.3 at the top of the 5 kHz band, 5623 Hz): the
+ * in-hole and end impedances in series. Thick: half the end impedance, a layer of the holes'
+ * equivalent fluid (ρ_eff from the in-hole impedance, bulk modulus ρ0c², porosity ε), the other
+ * half (Allard & Atalla 2009, ch. on perforated plates).
+ */
+function facingMatrix(b: BuildUp, f: number, a: Air): Matrix {
+  const { inHole, ends } = facingParts(b, f, a);
+  const eps = openArea(b);
+  const tPrime = b.facing.thickness + endCorrection(b, eps);
+  const topOfBands = 1000 * 10 ** 0.75;
+  if (((2 * Math.PI * topOfBands) / a.c) * tPrime <= 0.3) return [ONE, add(inHole, ends) as C, ZERO, ONE];
+  const q = (2 * Math.PI * f * b.facing.thickness) / a.c;
+  // jωρ_eff t/(ε ρ0 c) = inHole, so ρ_eff/ρ0 = inHole·ε/(j q)
+  const relative = divide(multiply(inHole, eps), complex(0, q)) as C;
+  const root = sqrt(relative) as C;
+  const zh = divide(root, eps) as C;
+  const kt = multiply(root, q) as C;
+  const layer: Matrix = [cos(kt), multiply(J, multiply(zh, sin(kt))) as C, divide(multiply(J, sin(kt)), zh) as C, cos(kt)];
+  const half: Matrix = [ONE, multiply(ends, 0.5) as C, ZERO, ONE];
+  return matmul(matmul(half, layer), half);
 }
 
 function tanh(z: C): C {
@@ -113,7 +135,7 @@ function matmul(A: Matrix, B: Matrix): Matrix {
 function surfaceZ(b: BuildUp, f: number, theta: number, a: Air): C {
   const k0 = (2 * Math.PI * f) / a.c;
   const s2 = Math.sin(theta) ** 2;
-  let T: Matrix = [ONE, facingZ(b, f, a), ZERO, ONE];
+  let T: Matrix = facingMatrix(b, f, a);
   for (const layer of layersOf(b)) {
     let kz: C;
     let zz: C;
