@@ -55,6 +55,17 @@ export function thirdOctaveSamples(n = SAMPLES_PER_BAND): Float64Array {
   return out;
 }
 
+const logCache = new Map<number, Float64Array>();
+
+/** ln f of thirdOctaveSamples(n), for searches on a log axis. */
+export function thirdOctaveLogSamples(n = SAMPLES_PER_BAND): Float64Array {
+  const hit = logCache.get(n);
+  if (hit) return hit;
+  const out = Float64Array.from(thirdOctaveSamples(n), Math.log);
+  logCache.set(n, out);
+  return out;
+}
+
 /** Means of consecutive groups of n values. */
 export function bandMeans(values: ArrayLike<number>, n: number): number[] {
   const out: number[] = [];

@@ -1,66 +1,117 @@
 /**
- * The cavity's impedance does not depend on the facing: Zs = Z_facing + Z_cavity at every
- * frequency and angle. A sweep over hole patterns (the design assistant) or a slider on the
- * facing (the tuning bench) can therefore keep the cavity's table and only add the facing.
- * The cache is explicit, passed in EvaluateOptions; without it every evaluation is computed anew.
+ * The cavity's impedance does not depend on the facing: the facing only maps the cavity's Zb to
+ * the surface's Zs, at every frequency and angle. A sweep over hole patterns (the design
+ * assistant) or a slider on the facing (the tuning bench) can therefore keep the cavity's table
+ * and only apply the facing; and as a sweep tries each hole pattern over many cavities, the
+ * facing's own values per frequency are kept too. The cache is explicit, passed in
+ * EvaluateOptions; without it every evaluation is computed anew.
  */
 import type { Air } from "./air";
-import type { Cavity, Infill } from "./build-up";
+import type { Cavity, Facing, Infill } from "./build-up";
+import { FACING_STATE as STATE, type FacingImpedance } from "./facing-impedance";
+
+/** a local copy: an imported binding is read through a getter in some module loaders */
+const FACING_STATE = STATE;
 import { cavityLayers } from "./build-up";
-import type { FacingImpedance } from "./facing-impedance";
 import { locallyReactingField, obliqueAbsorption } from "./incidence";
-import { type LayeredModel, fieldSum } from "./layered-model";
-import type { SpectrumGrid } from "./spectrum";
+import type { LayeredModel } from "./layered-model";
+import { OpenFieldRunner, type SpectrumGrid } from "./spectrum";
 
 export interface CavityTable {
   normalRe: Float64Array;
   normalIm: Float64Array;
-  /** per frequency, q.n angles; empty for a locally reacting cavity */
+  /** open cavity: per frequency, the base rule's angles from fieldOffset[k]; empty when locally reacting */
   fieldRe: Float64Array;
   fieldIm: Float64Array;
+  fieldOffset: Int32Array;
 }
 
 export function cavityTable(model: LayeredModel, grid: SpectrumGrid): CavityTable {
   const { frequencies, q } = grid;
   const nf = frequencies.length;
-  const size = grid.locallyReacting ? 0 : nf * q.n;
+  const open = grid.locallyReacting ? null : new OpenFieldRunner(model, q.maxAngleDeg);
+  const fieldOffset = new Int32Array(nf + 1);
+  for (let k = 0; k < nf; k++) fieldOffset[k + 1] = fieldOffset[k] + (open ? (grid.adaptive ? open.rule(frequencies[k]).n : q.n) : 0);
   const table: CavityTable = {
     normalRe: new Float64Array(nf),
     normalIm: new Float64Array(nf),
-    fieldRe: new Float64Array(size),
-    fieldIm: new Float64Array(size),
+    fieldRe: new Float64Array(fieldOffset[nf]),
+    fieldIm: new Float64Array(fieldOffset[nf]),
+    fieldOffset,
   };
   for (let k = 0; k < nf; k++) {
     model.setFrequency(frequencies[k]);
     model.impedance();
     table.normalRe[k] = model.cavityRe;
     table.normalIm[k] = model.cavityIm;
-    if (!grid.locallyReacting) model.cavityImpedances(q, table.fieldRe, table.fieldIm, k * q.n);
+    if (!open) continue;
+    const nodes = grid.adaptive ? open.rule(frequencies[k]) : q;
+    model.cavityImpedances(nodes.cos, nodes.sin2, nodes.n, table.fieldRe, table.fieldIm, fieldOffset[k]);
   }
   return table;
 }
 
-/** Normal and field-incidence absorption from a cavity table and a facing. */
-export function fillFromTable(facing: FacingImpedance, table: CavityTable, grid: SpectrumGrid): void {
+/** The facing's state at every frequency of the grid. */
+export function facingTable(facing: FacingImpedance, grid: SpectrumGrid): Float64Array {
+  const out = new Float64Array(FACING_STATE * grid.frequencies.length);
+  for (let k = 0; k < grid.frequencies.length; k++) {
+    facing.at(grid.frequencies[k]);
+    facing.save(out, FACING_STATE * k);
+  }
+  return out;
+}
+
+/**
+ * Normal and field-incidence absorption from a cavity table and the model of the same cavity
+ * with its facing (its state per frequency from a facing table when given).
+ */
+export function fillFromTable(model: LayeredModel, table: CavityTable, grid: SpectrumGrid, facingStates?: Float64Array): void {
   const { frequencies, q, normal, diffuse } = grid;
+  const facing = model.facing;
+  const open = grid.locallyReacting ? null : new OpenFieldRunner(model, q.maxAngleDeg);
   for (let k = 0; k < frequencies.length; k++) {
-    facing.at(frequencies[k]);
+    if (facingStates) facing.restore(facingStates, FACING_STATE * k);
+    else facing.at(frequencies[k]);
     facing.surface(table.normalRe[k], table.normalIm[k]);
     const zr = facing.sr;
     const zi = facing.si;
     normal[k] = obliqueAbsorption(zr, zi, 1);
-    diffuse[k] = grid.locallyReacting ? locallyReactingField(zr, zi, q) : fieldSum(table.fieldRe, table.fieldIm, k * q.n, facing, q);
+    if (!open) diffuse[k] = locallyReactingField(zr, zi, q);
+    else if (grid.adaptive) diffuse[k] = open.value(frequencies[k], { re: table.fieldRe, im: table.fieldIm, offset: table.fieldOffset[k] });
+    else diffuse[k] = fieldSumAt(table, k, model, q);
   }
+}
+
+function fieldSumAt(table: CavityTable, k: number, model: LayeredModel, q: SpectrumGrid["q"]): number {
+  let sum = 0;
+  const o = table.fieldOffset[k];
+  for (let j = 0; j < q.n; j++) {
+    model.facing.surface(table.fieldRe[o + j], table.fieldIm[o + j]);
+    sum += q.weight[j] * obliqueAbsorption(model.facing.sr, model.facing.si, q.cos[j]);
+  }
+  return sum;
 }
 
 export class CavityCache {
   private readonly tables = new Map<string, CavityTable>();
+  private readonly facings = new Map<string, Float64Array>();
 
   constructor(private readonly limit = 64) {}
 
+  facing(facing: Facing, air: Air, grid: SpectrumGrid, build: () => Float64Array): Float64Array {
+    const { frequencies } = grid;
+    const key = JSON.stringify([facing, air.c, air.rho, air.eta, frequencies.length, frequencies[0]]);
+    const hit = this.facings.get(key);
+    if (hit) return hit;
+    const states = build();
+    if (this.facings.size >= this.limit) this.facings.delete(this.facings.keys().next().value as string);
+    this.facings.set(key, states);
+    return states;
+  }
+
   table(cavity: Cavity, infill: Infill | null, air: Air, grid: SpectrumGrid, build: () => CavityTable): CavityTable {
     const { frequencies, q } = grid;
-    const key = JSON.stringify([cavityLayers(cavity, infill), cavity.partitioned, air.c, air.rho, frequencies.length, frequencies[0], q.n, q.maxAngleDeg]);
+    const key = JSON.stringify([cavityLayers(cavity, infill), cavity.partitioned, air.c, air.rho, frequencies.length, frequencies[0], q.n, q.maxAngleDeg, grid.adaptive]);
     const hit = this.tables.get(key);
     if (hit) return hit;
     const table = build();

@@ -20,19 +20,21 @@
  * correction 2δ (Smits & Kosten 1951, as used by Kristiansen & Vigran, Applied Acoustics 43,
  * 1994) and, as for ordinary holes, the end resistance 4·R_s/ε.
  *
- * Thin facing (lumped): the in-hole and end terms in series, Zs = Zb + z_in + z_end.
- * Thick facing (distributed), where k·t' exceeds THICK_FACING_LIMIT at the highest frequency
- * computed: the holes or slots are a layer of equivalent fluid of porosity ε and thickness t,
+ * Thin against the wavelength (lumped): the in-hole and end terms in series,
+ * Zs = Zb + z_in + z_end. Thick (distributed), where k·t' exceeds THICK_FACING_LIMIT anywhere
+ * in the bands computed (up to 5623 Hz): the holes or slots are a layer of equivalent fluid of porosity ε and thickness t,
  * with the in-hole effective density of the same in-hole law (ρ_eff = z_in·ε·z0/(jωt)) and the
  * adiabatic bulk modulus of air ρ0c², so k_h = k0·sqrt(ρ̃), Z_h = sqrt(ρ̃)/ε (ρ̃ = ρ_eff/ρ0); the
  * end masses and end resistance are series terms, half at each face (Allard & Atalla 2009, ch.
  * on perforated plates). For k_h·t → 0 it tends to the lumped facing; above, it keeps the
- * air-column resonances of the holes that the lumped facing misses.
+ * air-column resonances of the holes that the lumped facing misses. The choice is made once per
+ * facing, not per frequency: switching at k·t' = 0.3 would put a step into the curve wherever a
+ * resonance lies near it (up to 0.09 in α for a heavy slotted plate over a shallow cavity), since
+ * the layer also holds the compliance of the air in the holes, which the lumped facing lacks.
  */
 import type { Air } from "./air";
 import { THIRD_OCTAVES } from "./bands";
 import { type Facing, effectiveThickness, facingEndCorrection, facingOpenArea } from "./build-up";
-import { type Complex, csqrt, ctan } from "./complex";
 
 /** End resistance in units of R_s/ε: Maa's own for micro-perforation, 2·R_s per face otherwise. */
 export const MAA_END_RESISTANCE = 1;
@@ -45,9 +47,17 @@ export const HIGHEST_BAND_FREQUENCY = THIRD_OCTAVES[THIRD_OCTAVES.length - 1].up
 
 export type FacingModel = "lumped" | "distributed";
 
-/** k·t' at the highest frequency computed above THICK_FACING_LIMIT: the facing is a distributed layer. */
+/** Numbers a facing's state at one frequency takes (FacingImpedance.save). */
+export const FACING_STATE = 8;
+
+/** The frequency where k·t' = THICK_FACING_LIMIT. */
+export function thickFromHz(facing: Facing, air: Air): number {
+  return (THICK_FACING_LIMIT * air.c) / (2 * Math.PI * effectiveThickness(facing));
+}
+
+/** Distributed when k·t' exceeds THICK_FACING_LIMIT anywhere in the bands computed (up to 5623 Hz). */
 export function facingModelFor(facing: Facing, air: Air, highest = HIGHEST_BAND_FREQUENCY): FacingModel {
-  return ((2 * Math.PI * highest) / air.c) * effectiveThickness(facing) > THICK_FACING_LIMIT ? "distributed" : "lumped";
+  return highest > thickFromHz(facing, air) ? "distributed" : "lumped";
 }
 
 const NONE = 0;
@@ -86,6 +96,7 @@ export class FacingImpedance {
   private readonly scratch: Complex = { re: 0, im: 0 };
   private readonly tan: Complex = { re: 0, im: 0 };
 
+  /** `model` forces one model; by default it follows k·t' at the top of the bands */
   constructor(facing: Facing | null, air: Air, model?: FacingModel) {
     this.c = air.c;
     if (!facing) {
@@ -134,6 +145,30 @@ export class FacingImpedance {
     this.zr = this.inR + this.endR;
     this.zi = this.inI + this.endI;
     if (this.model === "distributed" && this.kind !== NONE) this.layer(w);
+  }
+
+  /** The state `at(f)` leaves, as FACING_STATE numbers into out from offset (for a facing table). */
+  save(out: Float64Array, offset: number): void {
+    out[offset] = this.zr;
+    out[offset + 1] = this.zi;
+    out[offset + 2] = this.ar;
+    out[offset + 3] = this.ai;
+    out[offset + 4] = this.br;
+    out[offset + 5] = this.bi;
+    out[offset + 6] = this.cr;
+    out[offset + 7] = this.ci;
+  }
+
+  /** The state of a frequency saved by `save`, in place of `at(f)`. */
+  restore(from: Float64Array, offset: number): void {
+    this.zr = from[offset];
+    this.zi = from[offset + 1];
+    this.ar = from[offset + 2];
+    this.ai = from[offset + 3];
+    this.br = from[offset + 4];
+    this.bi = from[offset + 5];
+    this.cr = from[offset + 6];
+    this.ci = from[offset + 7];
   }
 
   /** Zs from the impedance Zb of what lies behind the facing, into sr, si. */
@@ -200,7 +235,8 @@ export class FacingImpedance {
       const p = s / Math.SQRT2;
       let tr = 1;
       let ti = 0;
-      if (2 * p < 40) {
+      // beyond 2p = 24, tanh λ = 1 to 10⁻¹⁰
+      if (2 * p < 24) {
         const e = Math.exp(2 * p);
         const sh = 0.5 * (e - 1 / e);
         const den = 0.5 * (e + 1 / e) + Math.cos(2 * p);
@@ -226,4 +262,83 @@ export function facingImpedance(facing: Facing, f: number, air: Air): { re: numb
   const model = new FacingImpedance(facing, air, "lumped");
   model.at(f);
   return { re: model.zr, im: model.zi };
+}
+
+// Complex helpers of the layer, kept in this module: the hot path calls them per frequency.
+
+/**
+ * Taylor coefficients of tan z, of z²⁵ down to z¹ (tan z = Σ c·z^(2n−1), c from the Bernoulli
+ * numbers: (−1)^(n−1)·2^(2n)·(2^(2n) − 1)·B_2n/(2n)!).
+ */
+const TAN_SERIES = [
+  58870668456604 / 3698160658676859375,
+  113927491862 / 2900518163668125,
+  18888466084 / 194896477400625,
+  443861162 / 1856156927625,
+  6404582 / 10854718875,
+  929569 / 638512875,
+  21844 / 6081075,
+  1382 / 155925,
+  62 / 2835,
+  17 / 315,
+  2 / 15,
+  1 / 3,
+  1,
+];
+
+interface Complex {
+  re: number;
+  im: number;
+}
+
+/** Principal square root: non-negative real part, imaginary part of the sign of z's. */
+function csqrt(re: number, im: number, out: Complex): void {
+  const m = Math.sqrt(re * re + im * im);
+  if (m === 0) {
+    out.re = 0;
+    out.im = 0;
+    return;
+  }
+  if (re >= 0) {
+    const r = Math.sqrt(0.5 * (m + re));
+    out.re = r;
+    out.im = im / (2 * r);
+  } else {
+    const i = (im < 0 ? -1 : 1) * Math.sqrt(0.5 * (m - re));
+    out.re = im / (2 * i);
+    out.im = i;
+  }
+}
+
+/**
+ * tan(a + jb) = (sin 2a + j sinh 2b) / (cos 2a + cosh 2b); ±j where |b| is large. Below
+ * |z| = 0.6 its Taylor series to z²⁵ (the rest under 10⁻¹⁰ of the value: each further term is
+ * about (2|z|/π)² = 0.15 of the one before), which needs no exponential or sine.
+ */
+function ctan(a: number, b: number, out: Complex): void {
+  if (a * a + b * b < 0.36) {
+    // z·P(z²), P by Horner's rule
+    const wr = a * a - b * b;
+    const wi = 2 * a * b;
+    let pr = TAN_SERIES[0];
+    let pi = 0;
+    for (let i = 1; i < TAN_SERIES.length; i++) {
+      const nr = pr * wr - pi * wi + TAN_SERIES[i];
+      pi = pr * wi + pi * wr;
+      pr = nr;
+    }
+    out.re = a * pr - b * pi;
+    out.im = a * pi + b * pr;
+    return;
+  }
+  if (b > 20 || b < -20) {
+    out.re = 0;
+    out.im = b > 0 ? 1 : -1;
+    return;
+  }
+  const e = Math.exp(2 * b);
+  const ie = 1 / e;
+  const g = 1 / (Math.cos(2 * a) + 0.5 * (e + ie));
+  out.re = g * Math.sin(2 * a);
+  out.im = g * 0.5 * (e - ie);
 }

@@ -38,7 +38,12 @@ export class LayeredModel {
   /** per porous layer: Zc.re, Zc.im, kc.re, kc.im at the current frequency */
   private readonly fluid: Float64Array;
   private readonly rho: number;
-  private readonly c: number;
+  /** speed of sound, m/s */
+  readonly c: number;
+  /** the whole cavity, facing to backing, m */
+  readonly depth: number;
+  /** the cavity's depth when it is air alone (no infill), else null */
+  readonly airOnly: number | null;
   private k0 = 0;
   private re = new Float64Array(16);
   private im = new Float64Array(16);
@@ -51,12 +56,19 @@ export class LayeredModel {
     this.facing = new FacingImpedance(facing, air, facingModel);
     this.rho = air.rho;
     this.c = air.c;
+    this.depth = this.layers.reduce((sum, layer) => sum + layer.thickness, 0);
+    this.airOnly = this.count === 1 && this.layers[0].kind === "air" ? this.depth : null;
   }
 
   /** Prepare everything that depends on frequency only. */
   setFrequency(f: number): void {
-    this.k0 = (2 * Math.PI * f) / this.c;
     this.facing.at(f);
+    this.setCavityFrequency(f);
+  }
+
+  /** The cavity's part of setFrequency: for a caller that has set the facing itself. */
+  setCavityFrequency(f: number): void {
+    this.k0 = (2 * Math.PI * f) / this.c;
     for (let i = 0; i < this.count; i++) {
       const layer = this.layers[i];
       if (layer.kind === "porous") {
@@ -89,11 +101,13 @@ export class LayeredModel {
     return fieldSum(this.re, this.im, 0, this.facing, q);
   }
 
-  /** The cavity alone (no facing) at the angles of q, copied into re, im from offset. */
-  cavityImpedances(q: Quadrature, re: Float64Array, im: Float64Array, offset: number): void {
-    this.layerImpedances(q.cos, q.sin2, q.n);
-    re.set(this.re.subarray(0, q.n), offset);
-    im.set(this.im.subarray(0, q.n), offset);
+  /** The cavity alone (no facing) at n angles (cosines, squared sines), copied into re, im from offset. */
+  cavityImpedances(cos: Float64Array, sin2: Float64Array, n: number, re: Float64Array, im: Float64Array, offset = 0): void {
+    this.layerImpedances(cos, sin2, n);
+    for (let j = 0; j < n; j++) {
+      re[offset + j] = this.re[j];
+      im[offset + j] = this.im[j];
+    }
   }
 
   /** Impedances of the layers on the backing at n angles (cosines, squared sines) into re, im. */
@@ -212,12 +226,20 @@ export function fieldSum(re: Float64Array, im: Float64Array, offset: number, fac
     }
     return sum;
   }
+  // Zs = (A·Zb + B)/(C·Zb + A), written out on locals
+  const { ar, ai, br, bi, cr, ci } = facing;
   for (let j = 0; j < q.n; j++) {
-    facing.surface(re[offset + j], im[offset + j]);
+    const zr = re[offset + j];
+    const zi = im[offset + j];
+    const nr = ar * zr - ai * zi + br;
+    const ni = ar * zi + ai * zr + bi;
+    const dr = cr * zr - ci * zi + ar;
+    const di = cr * zi + ci * zr + ai;
+    // α = 4u·Re(N·conj D)/|N·u + D|², one division
     const c = q.cos[j];
-    const a = facing.sr * c;
-    const b = facing.si * c;
-    sum += (q.weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
+    const er = nr * c + dr;
+    const ei = ni * c + di;
+    sum += (q.weight[j] * 4 * c * (nr * dr + ni * di)) / (er * er + ei * ei);
   }
   return sum;
 }

@@ -1,9 +1,10 @@
 /**
- * peakHz (REFERENCES.md section 0): the frequency of the maximum of the full model's
- * normal-incidence absorption below the cavity's quarter-wave frequency c/(4D). It is bracketed
- * on a log grid (40 points over three decades, 19 % apart: the two cells around the best point
- * hold the maximum of a single-peaked curve) and refined by Brent's method (parabolic steps
- * safeguarded by golden sections; Brent, Algorithms for Minimization without Derivatives, 1973).
+ * peakHz: the frequency of the maximum of the full model's normal-incidence absorption below the
+ * cavity's quarter-wave frequency c/(4D). It is bracketed on a log grid (40 points over three
+ * decades, 19 % apart: the two cells around the best point hold the maximum of a single-peaked
+ * curve), where the evaluation's own band samples (3.3 % apart) stand in for the grid within
+ * their range, and refined by Brent's method (parabolic steps safeguarded by golden sections;
+ * Brent, Algorithms for Minimization without Derivatives, 1973).
  */
 import type { LayeredModel } from "./layered-model";
 
@@ -22,23 +23,48 @@ export interface Peak {
   atLowerLimit: boolean;
 }
 
-export function findPeak(model: LayeredModel, upper: number): Peak {
+/** Normal-incidence absorption already computed, at ascending frequencies (and their logarithms). */
+export interface KnownAbsorption {
+  f: ArrayLike<number>;
+  lnF: ArrayLike<number>;
+  alpha: ArrayLike<number>;
+}
+
+const lnF = new Float64Array(GRID + 400);
+
+export function findPeak(model: LayeredModel, upper: number, known?: KnownAbsorption): Peak {
   const lower = upper / SPAN;
   const step = Math.log(SPAN) / (GRID - 1);
+  const from = known && known.f.length ? known.f[0] : Infinity;
+  const to = known && known.f.length ? known.f[known.f.length - 1] : -Infinity;
+  // the bracket: grid points outside the known range, known points inside (lower, upper)
+  let count = 0;
   let best = 0;
   let bestAlpha = -1;
-  for (let i = 0; i < GRID; i++) {
-    const alpha = model.normalAbsorption(lower * Math.exp(i * step));
+  const take = (lf: number, alpha: number) => {
+    lnF[count] = lf;
     if (alpha > bestAlpha) {
       bestAlpha = alpha;
-      best = i;
+      best = count;
     }
+    count++;
+  };
+  let j = 0;
+  for (let i = 0; i < GRID; i++) {
+    const f = i === GRID - 1 ? upper : lower * Math.exp(i * step);
+    if (i > 0 && i < GRID - 1 && f >= from && f <= to) continue;
+    // known points below this grid point come first
+    while (known && j < known.f.length && known.f[j] < f) {
+      if (known.f[j] > lower && known.f[j] < upper && count + 2 < lnF.length) take(known.lnF[j], known.alpha[j]);
+      j++;
+    }
+    take(Math.log(f), model.normalAbsorption(f));
   }
-  // the best grid point at the limit still leaves the last cell to search
-  const a = Math.log(lower) + Math.max(best - 1, 0) * step;
-  const b = Math.log(lower) + Math.min(best + 1, GRID - 1) * step;
+  // the best point at the limit still leaves the cell next to it to search
+  const a = lnF[Math.max(best - 1, 0)];
+  const b = lnF[Math.min(best + 1, count - 1)];
   const x = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), a, b);
-  if (b - x < 10 * TOLERANCE && best === GRID - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
+  if (b - x < 10 * TOLERANCE && best === count - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
   if (x - a < 10 * TOLERANCE && best === 0) return { f: lower, alpha: model.normalAbsorption(lower), atLimit: false, atLowerLimit: true };
   const f = Math.exp(x);
   return { f, alpha: model.normalAbsorption(f), atLimit: false, atLowerLimit: false };

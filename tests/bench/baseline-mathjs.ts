@@ -70,8 +70,8 @@ function facingParts(b: BuildUp, f: number, a: Air): { inHole: C; ends: C } {
 }
 
 /**
- * The facing as a 2×2 matrix. Thin (k·t' ≤ 0.3 at the top of the 5 kHz band, 5623 Hz): the
- * in-hole and end impedances in series. Thick: half the end impedance, a layer of the holes'
+ * The facing as a 2×2 matrix. Thin against the wavelength (k·t' ≤ 0.3 at the top of the 5 kHz
+ * band, 5623 Hz): the in-hole and end impedances in series. Thick: half the end impedance, a layer of the holes'
  * equivalent fluid (ρ_eff from the in-hole impedance, bulk modulus ρ0c², porosity ε), the other
  * half (Allard & Atalla 2009, ch. on perforated plates).
  */

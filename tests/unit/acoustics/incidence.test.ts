@@ -100,14 +100,15 @@ describe("diffuse absorption computed two ways (property tests)", () => {
     );
   });
 
-  // Known limit: a deep, lightly damped open cavity has sharp angular resonances that a fixed
-  // 16-point rule does not resolve; band values then carry a quadrature error up to about 0.01
-  // (0.0087 at worst in 400 random open build-ups, 99 % below 0.0012, against 256 points).
-  it("an undamped open cavity: 16 points stay within 0.006 of 256 per band", () => {
+  // A deep open cavity behind a bare panel has sharp oblique resonances that a fixed 16-point
+  // rule steps over or lands on: the engine resolves them (lib/acoustics/field-incidence.ts)
+  it("an undamped open cavity: the engine's rule within 0.002 of 256 fixed points per band, where 16 fixed points are not", () => {
     const b = { facing: { kind: "round-holes" as const, thickness: 0.0125, holeDiameter: 0.008, pitch: 0.016, grid: "square" as const }, cavity: { depth: 0.2, partitioned: false }, infill: null };
-    const coarse = evaluateBuildUp(b);
+    const engine = evaluateBuildUp(b);
     const fine = evaluateBuildUp(b, { angles: 256 });
-    coarse.thirdOctaves.forEach((band, i) => expect(Math.abs(band.diffuse - fine.thirdOctaves[i].diffuse)).toBeLessThan(0.006));
+    const coarse = evaluateBuildUp(b, { angles: 16 });
+    engine.thirdOctaves.forEach((band, i) => expect(Math.abs(band.diffuse - fine.thirdOctaves[i].diffuse)).toBeLessThan(0.002));
+    expect(Math.max(...coarse.thirdOctaves.map((band, i) => Math.abs(band.diffuse - fine.thirdOctaves[i].diffuse)))).toBeGreaterThan(0.002);
   });
 });
 

@@ -24,8 +24,8 @@ const air = airProperties();
 // 25 mm of air; rigid backing; transfer matrices (Allard & Atalla, Propagation of Sound in
 // Porous Media, 2009, ch. 11); field incidence 0–78° divided by sin²78° (London 1950; Paris
 // 1928). Values at the exact frequency f, printed to four decimals. The table is of the lumped
-// (series) facing; the engine treats this 6 mm plate as a distributed layer (k·t' = 0.94 at
-// 5.6 kHz), checked against the table where the plate is thin against the wavelength below.
+// (series) facing; the engine takes this 6 mm plate (t' = 9.19 mm, k·t' = 0.95 at 5.6 kHz)
+// as a distributed layer, checked against the table where it is thin against the wavelength.
 const T6 = {
   normal: [0.0318, 0.0504, 0.0873, 0.1521, 0.2865, 0.5858, 0.9208, 0.653, 0.326, 0.1682, 0.1001, 0.0648, 0.0443, 0.0355, 0.0359, 0.039, 0.0093, 0.0051],
   fieldExtended: [0.0507, 0.0771, 0.1237, 0.1932, 0.3114, 0.527, 0.8217, 0.8369, 0.5907, 0.357, 0.218, 0.1349, 0.0821, 0.0552, 0.0408, 0.0358, 0.0249, 0.0153],
@@ -65,20 +65,23 @@ describe("perforated plate + porous + air on rigid backing [computed independent
     // 4·R_s/ε and Fok's lighter end mass: the peak moves up (384.1 Hz with 0.85d) and α rises
     expect(findPeak(earlier, air.c / (4 * 0.05)).f).toBeCloseTo(384.1, 1);
   });
-  it("the engine's distributed facing for this plate agrees with the table wherever k·t' < 0.3 (f < 1.78 kHz), and its peak within 0.05 %", () => {
-    const distributed = new LayeredModel(plate, T6_CAVITY, air);
-    expect(distributed.facing.model).toBe("distributed");
+  it("the engine's distributed facing for this plate is within 0.001 of the table where k·t' < 0.3 (below 1.78 kHz) and 0.004 above, its peak within 0.05 %", () => {
+    const engine = new LayeredModel(plate, T6_CAVITY, air);
+    expect(engine.facing.model).toBe("distributed");
     const tPrime = 0.006 + 0.003192;
     NOMINAL.forEach((f, i) => {
-      if (((2 * Math.PI * f) / air.c) * tPrime < 0.3) expect(Math.abs(distributed.normalAbsorption(f) - T6.normal[i])).toBeLessThan(1e-3);
+      const thin = ((2 * Math.PI * f) / air.c) * tPrime < 0.3;
+      expect(Math.abs(engine.normalAbsorption(f) - T6.normal[i])).toBeLessThan(thin ? 1e-3 : 4e-3);
     });
-    expect(Math.abs(findPeak(distributed, air.c / (4 * 0.05)).f / 404.17 - 1)).toBeLessThan(5e-4);
+    expect(Math.abs(findPeak(engine, air.c / (4 * 0.05)).f / 404.17 - 1)).toBeLessThan(5e-4);
   });
 });
 
 describe("independent route: full 2×2 matrices with mathjs complex numbers (tests/bench/baseline-mathjs.ts)", () => {
+  // the same fixed 16-point field rule on both sides: this checks the matrices and the facing,
+  // not the quadrature (the open-cavity rule is checked against an adaptive one elsewhere)
   const compare = (b: BuildUp) => {
-    const fast = evaluateBuildUp(b);
+    const fast = evaluateBuildUp(b, { angles: 16 });
     const slow = baselineEvaluate(b);
     fast.thirdOctaves.forEach((band, i) => {
       expect(Math.abs(band.normal - slow.thirds[i].normal)).toBeLessThan(1e-9);
@@ -94,7 +97,7 @@ describe("independent route: full 2×2 matrices with mathjs complex numbers (tes
       infill: null,
     };
     compare(light);
-    const e = evaluateBuildUp(light);
+    const e = evaluateBuildUp(light, { angles: 16 });
     expect(e.peakHz).toBeLessThan(e.quarterWaveHz * 0.99);
     expect(e.warnings.map((w) => w.code)).not.toContain("no-peak");
   });
