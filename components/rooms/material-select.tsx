@@ -1,11 +1,13 @@
 import type { MaterialView } from "@/lib/services/materials";
 
-// Finishes grouped: the project's own first, then the built-in library (values marked
-// "typical, from memory" where they were recalled rather than checked).
+// Finishes grouped: the project's own first, then the built-in library, its published values
+// (book and table) apart from the few recalled from memory; the chosen finish's source shows
+// under the field, so a consultant sees where a number comes from before relying on it.
 export function MaterialSelect({ id, value, onChange, materials, error, label }: { id: string; value: string; onChange: (key: string) => void; materials: MaterialView[]; error?: string; label: string }) {
   const own = materials.filter((m) => m.own);
-  const library = materials.filter((m) => !m.own);
-  const known = materials.some((m) => m.key === value);
+  const published = materials.filter((m) => !m.own && m.provenance !== "from memory");
+  const recalled = materials.filter((m) => !m.own && m.provenance === "from memory");
+  const chosen = materials.find((m) => m.key === value);
   return (
     <div className="flex flex-col gap-0.5">
       <label htmlFor={id} className="sr-only">
@@ -15,10 +17,11 @@ export function MaterialSelect({ id, value, onChange, materials, error, label }:
         id={id}
         value={value}
         aria-invalid={error ? true : undefined}
+        aria-describedby={chosen ? `${id}-source` : undefined}
         onChange={(e) => onChange(e.target.value)}
         className={`w-full rounded-sheet border bg-white/70 px-2 py-1 text-xs ${error ? "border-fault" : "border-paper-edge"}`}
       >
-        {!known && <option value={value}>{value} (unknown)</option>}
+        {!chosen && <option value={value}>{value} (unknown)</option>}
         {own.length > 0 && (
           <optgroup label="This project's materials">
             {own.map((m) => (
@@ -28,14 +31,28 @@ export function MaterialSelect({ id, value, onChange, materials, error, label }:
             ))}
           </optgroup>
         )}
-        <optgroup label="Library (typical values, from memory)">
-          {library.map((m) => (
+        <optgroup label="Library: published values">
+          {published.map((m) => (
             <option key={m.key} value={m.key}>
               {m.name}
             </option>
           ))}
         </optgroup>
+        {recalled.length > 0 && (
+          <optgroup label="Library: no published value found (from memory)">
+            {recalled.map((m) => (
+              <option key={m.key} value={m.key}>
+                {m.name} (from memory)
+              </option>
+            ))}
+          </optgroup>
+        )}
       </select>
+      {chosen && (
+        <p id={`${id}-source`} title={chosen.source} className={`truncate text-[10px] ${chosen.provenance === "from memory" ? "text-caution" : "text-ink-faint"}`} data-testid="finish-source">
+          {chosen.short}
+        </p>
+      )}
       {error && (
         <p role="alert" className="text-[11px] font-medium text-fault">
           {error}
