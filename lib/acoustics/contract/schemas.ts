@@ -1,5 +1,5 @@
 /**
- * One zod schema per input of the calculation contract (SPEC.md section 6), shared by the
+ * One zod schema per input of the calculation contract (docs/contract.md), shared by the
  * command line and the HTTP API. Physical consistency (holes smaller than their pitch, open
  * area in (0, 1), infill no thicker than the cavity, …) is checked here so that both surfaces
  * refuse the same inputs with the same messages.

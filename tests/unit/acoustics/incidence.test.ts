@@ -20,12 +20,13 @@ describe("Gauss–Legendre rule", () => {
       const q = fieldQuadrature(16, max);
       expect(q.weight.reduce((s, v) => s + v, 0)).toBeCloseTo(1, 13);
     }
-    expect(Math.sin(deg(78)) ** 2).toBeCloseTo(0.9568, 4); // REFERENCES.md 6
+    expect(Math.sin(deg(78)) ** 2).toBeCloseTo(0.9568, 4); // sin²78°, by hand
   });
 });
 
-describe("London's closed form for a locally reacting surface (REFERENCES.md 6, T6b)", () => {
-  // [MEMORY] formula, self-verified in REFERENCES.md against the numerical Paris integral.
+describe("London's closed form for a locally reacting surface (London 1950; Kuttruff, Room Acoustics)", () => {
+  // The formula from memory; the values computed from it in numpy, and checked there against a
+  // numerical Paris integral to six decimals.
   it.each([
     [1, 0, 0.909645],
     [1.567, 0, 0.951222],
@@ -52,7 +53,7 @@ describe("London's closed form for a locally reacting surface (REFERENCES.md 6, 
 describe("diffuse absorption computed two ways (property tests)", () => {
   const freqs = [63, 125, 250, 500, 1000, 2000, 4000];
 
-  it("closed form of the field integral (derived here) reproduces London at 90° (T6b values)", () => {
+  it("closed form of the field integral (derived here) reproduces London at 90° (the values above)", () => {
     expect(fieldClosedForm(1, 0, 90)).toBeCloseTo(0.909645, 6);
     expect(fieldClosedForm(2, 1, 90)).toBeCloseTo(0.870452, 6);
     expect(fieldClosedForm(0.5, -0.5, 90)).toBeCloseTo(0.669674, 6);

@@ -6,10 +6,10 @@ import { RATING_EXAMPLES, ratingsOf, thirdsOf } from "./fixtures";
 
 const thirds = thirdsOf;
 
-// REFERENCES.md 7.3 [COMPUTED from the rules of ISO 11654:1997 and ASTM C423]; the procedure is
-// [SRC-CONFIRMED] in public summaries, class boundaries [SRC-CONFIRMED], reference curve and
-// rounding steps [MEMORY].
-describe("ISO 11654 and ASTM C423 ratings (REFERENCES.md 7.3) [COMPUTED]", () => {
+// Worked examples computed by hand and in Python from the rules of ISO 11654:1997 (clause 4,
+// Annex B) and ASTM C423 (NRC, SAA): the procedure and the class boundaries as public summaries
+// of the standards give them; the reference curve and the rounding steps from memory.
+describe("ISO 11654 and ASTM C423 ratings (worked examples computed from the standards' rules)", () => {
   it.each(RATING_EXAMPLES)("$name", (example) => {
     expect(rateThirdOctaves(thirds(example.third))).toEqual(ratingsOf(example));
   });
@@ -30,7 +30,7 @@ describe("ISO 11654 and ASTM C423 ratings (REFERENCES.md 7.3) [COMPUTED]", () =>
     expect(r.class).toBe("A");
   });
 
-  it("class boundaries (ISO 11654 Annex B) [SRC-CONFIRMED]", () => {
+  it("class boundaries (ISO 11654 Annex B)", () => {
     expect([100, 90, 85, 80, 75, 60, 55, 30, 25, 15, 10, 0].map(absorptionClass)).toEqual(["A", "A", "B", "B", "C", "C", "D", "D", "E", "E", "not classified", "not classified"]);
   });
 });

@@ -9,7 +9,7 @@ const GROUPS = ["A1", "A2", "A3", "A4", "A5"] as const;
 // DIN 18041:2016-03 room group A, T_soll = a·lg(V/m³) + b (the formulas as a manufacturer's
 // building-physics guide quotes the standard); unrounded values computed from the formulas in
 // Python, rounded here by hand, half up, to two decimals as the standard states them.
-const T9: [number, number[], number[]][] = [
+const TSOLL: [number, number[], number[]][] = [
   [100, [0.97, 0.6, 0.47, 0.38, 0.5], [0.97, 0.6, 0.47, 0.38, 0.5]],
   [200, [1.1055, 0.7114, 0.5663, 0.4583, 0.7258], [1.11, 0.71, 0.57, 0.46, 0.73]],
   [250, [1.1491, 0.7472, 0.5973, 0.4835, 0.7985], [1.15, 0.75, 0.6, 0.48, 0.8]],
@@ -21,7 +21,7 @@ const T9: [number, number[], number[]][] = [
 ];
 
 describe("DIN 18041:2016-03 group A, T_soll (formulas as quoted from the standard; values computed from them)", () => {
-  it.each(T9)("V = %i m³", (volume, exact, rounded) => {
+  it.each(TSOLL)("V = %i m³", (volume, exact, rounded) => {
     GROUPS.forEach((group, i) => {
       const t = dinTsoll(group, volume);
       expect(Math.abs(t.exact - exact[i]), `${group} exact`).toBeLessThan(5e-5 + 1e-9);
