@@ -92,31 +92,39 @@ function fieldSumAt(table: CavityTable, k: number, model: LayeredModel, q: Spect
   return sum;
 }
 
-export class CavityCache {
-  private readonly tables = new Map<string, CavityTable>();
-  private readonly facings = new Map<string, Float64Array>();
+/** A map of at most `limit` entries, the oldest dropped first. */
+class Bounded<T> {
+  private readonly entries = new Map<string, T>();
 
-  constructor(private readonly limit = 64) {}
+  constructor(private readonly limit: number) {}
+
+  get(key: string, build: () => T): T {
+    const hit = this.entries.get(key);
+    if (hit) return hit;
+    const value = build();
+    if (this.entries.size >= this.limit) this.entries.delete(this.entries.keys().next().value as string);
+    this.entries.set(key, value);
+    return value;
+  }
+}
+
+export class CavityCache {
+  private readonly tables: Bounded<CavityTable>;
+  private readonly facings: Bounded<Float64Array>;
+
+  constructor(limit = 64) {
+    this.tables = new Bounded(limit);
+    this.facings = new Bounded(limit);
+  }
 
   facing(facing: Facing, air: Air, grid: SpectrumGrid, build: () => Float64Array): Float64Array {
     const { frequencies } = grid;
-    const key = JSON.stringify([facing, air.c, air.rho, air.eta, frequencies.length, frequencies[0]]);
-    const hit = this.facings.get(key);
-    if (hit) return hit;
-    const states = build();
-    if (this.facings.size >= this.limit) this.facings.delete(this.facings.keys().next().value as string);
-    this.facings.set(key, states);
-    return states;
+    return this.facings.get(JSON.stringify([facing, air.c, air.rho, air.eta, frequencies.length, frequencies[0]]), build);
   }
 
   table(cavity: Cavity, infill: Infill | null, air: Air, grid: SpectrumGrid, build: () => CavityTable): CavityTable {
     const { frequencies, q } = grid;
     const key = JSON.stringify([cavityLayers(cavity, infill), cavity.partitioned, air.c, air.rho, frequencies.length, frequencies[0], q.n, q.maxAngleDeg, grid.adaptive]);
-    const hit = this.tables.get(key);
-    if (hit) return hit;
-    const table = build();
-    if (this.tables.size >= this.limit) this.tables.delete(this.tables.keys().next().value as string);
-    this.tables.set(key, table);
-    return table;
+    return this.tables.get(key, build);
   }
 }

@@ -72,7 +72,7 @@ export class FacingImpedance {
   sr = 0;
   si = 0;
   readonly model: FacingModel;
-  /** distributed: Zs = (A·Zb + B)/(C·Zb + A) after `at(f)` */
+  /** Zs = (A·Zb + B)/(C·Zb + A) after `at(f)`: thin, A = 1, B = z_in + z_end, C = 0 */
   ar = 1;
   ai = 0;
   br = 0;
@@ -145,6 +145,10 @@ export class FacingImpedance {
     this.zr = this.inR + this.endR;
     this.zi = this.inI + this.endI;
     if (this.model === "distributed" && this.kind !== NONE) this.layer(w);
+    else {
+      this.br = this.zr;
+      this.bi = this.zi;
+    }
   }
 
   /** The state `at(f)` leaves, as FACING_STATE numbers into out from offset (for a facing table). */

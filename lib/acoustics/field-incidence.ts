@@ -217,9 +217,9 @@ export class OpenCavityField {
     // u = 1, over the largest slope air + 2·Im Zf/|2 + u·Zf|² ≤ air + Im Zf/2: if that already
     // spans RESOLVED of the widest node gap (0.19 of a panel for 8 Gauss points), none is narrow
     const widest = (0.19 * (1 - this.u0)) / rule.panels;
-    if (halfWidth(this.map.ratio(1)) / (air + Math.max(0, this.map.bi) / 2) >= RESOLVED * widest) return false;
+    if (halfWidth(this.map.ratio(1)) / (air + Math.max(0, this.map.facing.bi) / 2) >= RESOLVED * widest) return false;
     let narrow = false;
-    this.zfPhase = Math.atan2(this.map.bi, this.map.br);
+    this.zfPhase = Math.atan2(this.map.facing.bi, this.map.facing.br);
     const middle = this.facingPhase(0.5 * (this.u0 + 1));
     // ψ lies within π/2 of its middle value: the dips within half a turn of the range
     const first = Math.ceil((air * this.u0 - middle - 0.5 * Math.PI) / (2 * Math.PI) - 0.5);
@@ -255,12 +255,12 @@ export class OpenCavityField {
 
   /** ψ(u) = arg(−r/s) = arg(u·Zf/(2 + u·Zf)) = arg Zf − arg(2 + u·Zf) of a thin facing. */
   private facingPhase(u: number): number {
-    return this.zfPhase - Math.atan2(u * this.map.bi, 2 + u * this.map.br);
+    return this.zfPhase - Math.atan2(u * this.map.facing.bi, 2 + u * this.map.facing.br);
   }
 
   /** dψ/du = −2·Im Zf / |2 + u·Zf|². */
   private facingPhaseSlope(u: number): number {
-    const { br, bi } = this.map;
+    const { br, bi } = this.map.facing;
     const dr = 2 + u * br;
     const di = u * bi;
     return (-2 * bi) / (dr * dr + di * di);
@@ -462,12 +462,12 @@ export function openCavityField(maxAngleDeg: number): OpenCavityField {
  */
 class FacingMap {
   lumped = true;
-  ar = 1;
-  ai = 0;
-  br = 0;
-  bi = 0;
-  cr = 0;
-  ci = 0;
+  /** the facing, set to the frequency: its A, B, C */
+  private f!: FacingImpedance;
+
+  get facing(): FacingImpedance {
+    return this.f;
+  }
   // r and s of the last `terms(u)`: s = 2A + uB + C/u, r = −uB + C/u
   rr = 0;
   ri = 0;
@@ -475,29 +475,15 @@ class FacingMap {
   si = 0;
 
   set(facing: FacingImpedance): void {
+    this.f = facing;
     this.lumped = facing.model === "lumped";
-    if (this.lumped) {
-      this.ar = 1;
-      this.ai = 0;
-      this.br = facing.zr;
-      this.bi = facing.zi;
-      this.cr = 0;
-      this.ci = 0;
-    } else {
-      this.ar = facing.ar;
-      this.ai = facing.ai;
-      this.br = facing.br;
-      this.bi = facing.bi;
-      this.cr = facing.cr;
-      this.ci = facing.ci;
-    }
   }
 
   /** Σ weight·α over nodes from … to − 1 of the cavity impedances re, im (from offset). */
   sum(weight: Float64Array, cos: Float64Array, re: Float64Array, im: Float64Array, offset: number, from: number, to: number): number {
     let sum = 0;
     if (this.lumped) {
-      const { br, bi } = this;
+      const { br, bi } = this.f;
       for (let i = from; i < to; i++) {
         const u = cos[i];
         const a = (re[offset + i] + br) * u;
@@ -515,7 +501,8 @@ class FacingMap {
    * met, compared without a division: the hot loop ahead of the dip search.
    */
   sumAndLargest(rule: BaseRule, re: Float64Array, im: Float64Array, offset: number, from: number, to: number): number {
-    const { ar, ai, br, bi, cr, ci, lumped } = this;
+    const { ar, ai, br, bi, cr, ci } = this.f;
+    const lumped = this.lumped;
     const { cos, weight, inverse } = rule;
     let sum = 0;
     let most = this.largest;
@@ -569,15 +556,15 @@ class FacingMap {
   /** α at angle θ (u = cosθ) in front of a cavity of impedance zr + j zi. */
   alpha(zr: number, zi: number, u: number): number {
     if (this.lumped) {
-      const a = (zr + this.br) * u;
-      const b = (zi + this.bi) * u;
+      const a = (zr + this.f.br) * u;
+      const b = (zi + this.f.bi) * u;
       return (4 * a) / ((a + 1) * (a + 1) + b * b);
     }
     // Zs = N/D: α = 4u·Re(N·conj D)/|N·u + D|²
-    const nr = this.ar * zr - this.ai * zi + this.br;
-    const ni = this.ar * zi + this.ai * zr + this.bi;
-    const dr = this.cr * zr - this.ci * zi + this.ar;
-    const di = this.cr * zi + this.ci * zr + this.ai;
+    const nr = this.f.ar * zr - this.f.ai * zi + this.f.br;
+    const ni = this.f.ar * zi + this.f.ai * zr + this.f.bi;
+    const dr = this.f.cr * zr - this.f.ci * zi + this.f.ar;
+    const di = this.f.cr * zi + this.f.ci * zr + this.f.ai;
     const er = nr * u + dr;
     const ei = ni * u + di;
     return (4 * u * (nr * dr + ni * di)) / (er * er + ei * ei);
@@ -585,18 +572,18 @@ class FacingMap {
 
   terms(u: number, inverse: number): void {
     if (this.lumped) {
-      this.rr = -u * this.br;
-      this.ri = -u * this.bi;
+      this.rr = -u * this.f.br;
+      this.ri = -u * this.f.bi;
       this.sr = 2 - this.rr;
       this.si = -this.ri;
       return;
     }
-    const cr = this.cr * inverse;
-    const ci = this.ci * inverse;
-    this.rr = -u * this.br + cr;
-    this.ri = -u * this.bi + ci;
-    this.sr = 2 * this.ar + u * this.br + cr;
-    this.si = 2 * this.ai + u * this.bi + ci;
+    const cr = this.f.cr * inverse;
+    const ci = this.f.ci * inverse;
+    this.rr = -u * this.f.br + cr;
+    this.ri = -u * this.f.bi + ci;
+    this.sr = 2 * this.f.ar + u * this.f.br + cr;
+    this.si = 2 * this.f.ai + u * this.f.bi + ci;
   }
 
   /**
@@ -608,13 +595,13 @@ class FacingMap {
     for (let k = 0; k < 3; k++) {
       const u = k === 0 ? u0 : k === 1 ? 0.5 * (u0 + 1) : 1;
       this.terms(u, 1 / u);
-      const c2r = this.cr / (u * u);
-      const c2i = this.ci / (u * u);
+      const c2r = this.f.cr / (u * u);
+      const c2i = this.f.ci / (u * u);
       // r'/r and s'/s
-      const dr1 = -this.br - c2r;
-      const di1 = -this.bi - c2i;
-      const dr2 = this.br - c2r;
-      const di2 = this.bi - c2i;
+      const dr1 = -this.f.br - c2r;
+      const di1 = -this.f.bi - c2i;
+      const dr2 = this.f.br - c2r;
+      const di2 = this.f.bi - c2i;
       const nr = this.rr * this.rr + this.ri * this.ri;
       const ns = this.sr * this.sr + this.si * this.si;
       const im1 = (di1 * this.rr - dr1 * this.ri) / nr;
