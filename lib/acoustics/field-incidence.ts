@@ -195,11 +195,7 @@ export class OpenCavityField {
     // taken at three angles with a margin of 3), spans RESOLVED of the widest node gap
     const widest = (0.19 * (1 - this.u0)) / rule.panels;
     if (halfWidth(Math.sqrt(map.largest)) / (phase + 3 * map.phaseSlope(this.u0)) >= RESOLVED * widest) return sum;
-    for (let i = 0; i < n; i++) {
-      map.direction(re[offset + i], im[offset + i], cos[i], rule.inverse[i], Y_SCRATCH);
-      this.yr[i] = Y_SCRATCH.re;
-      this.yi[i] = Y_SCRATCH.im;
-    }
+    map.directions(rule, re, im, offset, this.yr, this.yi);
     return this.findDips(rule, re, im, offset, cavityAt) ? this.rebuilt(rule.panels, cavityAt) : sum;
   }
 
@@ -643,6 +639,31 @@ class FacingMap {
     out.im = qi * this.sr - qr * this.si;
   }
 
+  /** `direction` at every node of the rule, written out on locals: Y into yr, yi. */
+  directions(rule: BaseRule, re: Float64Array, im: Float64Array, offset: number, yr: Float64Array, yi: Float64Array): void {
+    const { ar, ai, br, bi, cr, ci } = this.f;
+    const { n, cos, inverse } = rule;
+    for (let i = 0; i < n; i++) {
+      const u = cos[i];
+      const xr = re[offset + i] * u;
+      const xi = im[offset + i] * u;
+      // (ζu − 1)·conj(ζu + 1)
+      const pr = (xr - 1) * (xr + 1) + xi * xi;
+      const pi = 2 * xi;
+      // r = −uB + C/u, s = 2A + uB + C/u
+      const cu = cr * inverse[i];
+      const ciu = ci * inverse[i];
+      const rr = -u * br + cu;
+      const ri = -u * bi + ciu;
+      const sr = 2 * ar + u * br + cu;
+      const si = 2 * ai + u * bi + ciu;
+      const tr = -(rr * pr - ri * pi);
+      const ti = -(rr * pi + ri * pr);
+      yr[i] = tr * sr + ti * si;
+      yi[i] = ti * sr - tr * si;
+    }
+  }
+
   /** X = −r·R_c/s at angle u for a cavity of impedance zr + j zi. */
   variable(zr: number, zi: number, u: number, out: { re: number; im: number }): void {
     this.direction(zr, zi, u, 1 / u, out);
@@ -655,7 +676,6 @@ class FacingMap {
 }
 
 const X_SCRATCH = { re: 0, im: 0 };
-const Y_SCRATCH = { re: 0, im: 0 };
 
 /** Half-width in phase of the dip of |1 − X|² where |X| = m < 1: (1 − m)/sqrt(m). */
 function halfWidth(m: number): number {
