@@ -3,7 +3,8 @@
  * cavity's quarter-wave frequency c/(4D). It is bracketed on a log grid (40 points over three
  * decades, 19 % apart: the two cells around the best point hold the maximum of a single-peaked
  * curve), where the evaluation's own band samples (3.3 % apart) stand in for the grid within
- * their range, and refined by Brent's method (parabolic steps safeguarded by golden sections;
+ * their range and points as dense continue above it, and refined by Brent's method at each local
+ * maximum (the six highest), the highest refined value kept (parabolic steps safeguarded by golden sections;
  * Brent, Algorithms for Minimization without Derivatives, 1973).
  */
 import type { LayeredModel } from "./layered-model";
@@ -30,42 +31,77 @@ export interface KnownAbsorption {
   alpha: ArrayLike<number>;
 }
 
-const lnF = new Float64Array(GRID + 400);
+const lnF = new Float64Array(GRID + 600);
+const alphaAt = new Float64Array(GRID + 600);
+/** Local maxima of the bracket refined, the highest first: the highest sampled may not be the highest. */
+const MAX_CANDIDATES = 6;
+const candidates = new Int32Array(MAX_CANDIDATES);
 
 export function findPeak(model: LayeredModel, upper: number, known?: KnownAbsorption): Peak {
   const lower = upper / SPAN;
   const step = Math.log(SPAN) / (GRID - 1);
   const from = known && known.f.length ? known.f[0] : Infinity;
   const to = known && known.f.length ? known.f[known.f.length - 1] : -Infinity;
-  // the bracket: grid points outside the known range, known points inside (lower, upper)
+  // the bracket: the coarse grid below the known range, the known points within it, and above it
+  // points as dense as the known ones (a narrow peak up there is not stepped over)
   let count = 0;
   let best = 0;
   let bestAlpha = -1;
   const take = (lf: number, alpha: number) => {
+    if (count >= lnF.length) return;
     lnF[count] = lf;
+    alphaAt[count] = alpha;
     if (alpha > bestAlpha) {
       bestAlpha = alpha;
       best = count;
     }
     count++;
   };
-  let j = 0;
-  for (let i = 0; i < GRID; i++) {
-    const f = i === GRID - 1 ? upper : lower * Math.exp(i * step);
-    if (i > 0 && i < GRID - 1 && f >= from && f <= to) continue;
-    // known points below this grid point come first
-    while (known && j < known.f.length && known.f[j] < f) {
-      if (known.f[j] > lower && known.f[j] < upper && count + 2 < lnF.length) take(known.lnF[j], known.alpha[j]);
-      j++;
-    }
-    take(Math.log(f), model.normalAbsorption(f));
+  const lnLower = Math.log(lower);
+  const lnUpper = Math.log(upper);
+  for (let i = 0; i < GRID - 1; i++) {
+    const lf = lnLower + i * step;
+    if (i > 0 && Math.exp(lf) >= from) break;
+    take(lf, model.normalAbsorption(Math.exp(lf)));
   }
-  // the best point at the limit still leaves the cell next to it to search
-  const a = lnF[Math.max(best - 1, 0)];
-  const b = lnF[Math.min(best + 1, count - 1)];
+  if (known) {
+    for (let j = 0; j < known.f.length; j++) if (known.f[j] > lower && known.f[j] < upper) take(known.lnF[j], known.alpha[j]);
+  }
+  if (to < upper) {
+    const dense = known && known.lnF.length > 1 ? known.lnF[1] - known.lnF[0] : step;
+    for (let lf = Math.max(Math.log(Math.max(to, lower)) + dense, lnF[count - 1] + dense); lf < lnUpper - 0.5 * dense; lf += dense) take(lf, model.normalAbsorption(Math.exp(lf)));
+  }
+  take(lnUpper, model.normalAbsorption(upper));
+  // refine every local maximum (the highest few): a narrow peak's flank can sample lower than a
+  // broad one's top, as the air column of a thick facing's holes gives next to the cavity's
+  let found = 0;
+  for (let i = 0; i < count; i++) {
+    const local = (i === 0 || alphaAt[i] >= alphaAt[i - 1]) && (i === count - 1 || alphaAt[i] >= alphaAt[i + 1]);
+    if (!local) continue;
+    // keep the MAX_CANDIDATES highest, in any order
+    if (found < MAX_CANDIDATES) candidates[found++] = i;
+    else {
+      let low = 0;
+      for (let k = 1; k < found; k++) if (alphaAt[candidates[k]] < alphaAt[candidates[low]]) low = k;
+      if (alphaAt[i] > alphaAt[candidates[low]]) candidates[low] = i;
+    }
+  }
+  if (found === 0) candidates[found++] = best;
+  let result = refine(model, candidates[0], count, lower, upper);
+  for (let k = 1; k < found; k++) {
+    const peak = refine(model, candidates[k], count, lower, upper);
+    if (peak.alpha > result.alpha) result = peak;
+  }
+  return result;
+}
+
+/** Brent's method on the two cells around bracket point i (the cell next to an end point too). */
+function refine(model: LayeredModel, i: number, count: number, lower: number, upper: number): Peak {
+  const a = lnF[Math.max(i - 1, 0)];
+  const b = lnF[Math.min(i + 1, count - 1)];
   const x = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), a, b);
-  if (b - x < 10 * TOLERANCE && best === count - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
-  if (x - a < 10 * TOLERANCE && best === 0) return { f: lower, alpha: model.normalAbsorption(lower), atLimit: false, atLowerLimit: true };
+  if (b - x < 10 * TOLERANCE && i === count - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
+  if (x - a < 10 * TOLERANCE && i === 0) return { f: lower, alpha: model.normalAbsorption(lower), atLimit: false, atLowerLimit: true };
   const f = Math.exp(x);
   return { f, alpha: model.normalAbsorption(f), atLimit: false, atLowerLimit: false };
 }

@@ -191,26 +191,36 @@ export function baselineEvaluate(b: BuildUp, angles = 16, maxDeg = 78, perBand =
   return { thirds, peakHz: baselinePeak(b, a) };
 }
 
-/** The peak below c/(4D) by an 80-point log grid and golden sections (the engine brackets on 40 points and refines by Brent's method; both converge on the same maximum). */
+/**
+ * The peak below c/(4D): every local maximum of a log grid 1/70 decade apart over the three
+ * decades refined by golden sections, the highest kept (the engine brackets on its band samples
+ * and a grid and refines its best candidates by Brent's method: both must land on the same,
+ * highest maximum).
+ */
 function baselinePeak(b: BuildUp, a: Air): number {
   const upper = a.c / (4 * b.cavity.depth);
   const lower = upper / 1000;
   const alpha = (lf: number) => alphaOf(surfaceZ(b, Math.exp(lf), 0, a), 0);
-  const step = Math.log(1000) / 79;
-  let best = 0;
-  let bestAlpha = -1;
-  for (let i = 0; i < 80; i++) {
-    const v = alpha(Math.log(lower) + i * step);
-    if (v > bestAlpha) [best, bestAlpha] = [i, v];
+  const points = 211;
+  const step = Math.log(1000) / (points - 1);
+  const grid = Array.from({ length: points }, (_, i) => alpha(Math.log(lower) + i * step));
+  // every local maximum of the grid is refined by golden sections; the highest wins
+  let bestF = upper;
+  let bestValue = -1;
+  for (let i = 0; i < points; i++) {
+    if ((i > 0 && grid[i] < grid[i - 1]) || (i < points - 1 && grid[i] < grid[i + 1])) continue;
+    let lo = Math.log(lower) + Math.max(i - 1, 0) * step;
+    let hi = Math.log(lower) + Math.min(i + 1, points - 1) * step;
+    const g = (Math.sqrt(5) - 1) / 2;
+    while (hi - lo > 1e-8) {
+      const x1 = hi - g * (hi - lo);
+      const x2 = lo + g * (hi - lo);
+      if (alpha(x1) < alpha(x2)) lo = x1;
+      else hi = x2;
+    }
+    const f = i === points - 1 && Math.log(upper) - 0.5 * (lo + hi) < 1e-7 ? upper : Math.exp(0.5 * (lo + hi));
+    const value = alpha(Math.log(f));
+    if (value > bestValue) [bestF, bestValue] = [f, value];
   }
-  let lo = Math.log(lower) + Math.max(best - 1, 0) * step;
-  let hi = Math.log(lower) + Math.min(best + 1, 79) * step;
-  const g = (Math.sqrt(5) - 1) / 2;
-  while (hi - lo > 1e-8) {
-    const x1 = hi - g * (hi - lo);
-    const x2 = lo + g * (hi - lo);
-    if (alpha(x1) < alpha(x2)) lo = x1;
-    else hi = x2;
-  }
-  return best === 79 && Math.log(upper) - 0.5 * (lo + hi) < 1e-7 ? upper : Math.exp(0.5 * (lo + hi));
+  return bestF;
 }
