@@ -78,18 +78,8 @@ export function fillFromTable(model: LayeredModel, table: CavityTable, grid: Spe
     normal[k] = obliqueAbsorption(zr, zi, 1);
     if (!open) diffuse[k] = locallyReactingField(zr, zi, q);
     else if (grid.adaptive) diffuse[k] = open.value(frequencies[k], { re: table.fieldRe, im: table.fieldIm, offset: table.fieldOffset[k] });
-    else diffuse[k] = fieldSumAt(table, k, model, q);
+    else diffuse[k] = facing.fieldSum(q.weight, q.cos, table.fieldRe, table.fieldIm, table.fieldOffset[k], 0, q.n);
   }
-}
-
-function fieldSumAt(table: CavityTable, k: number, model: LayeredModel, q: SpectrumGrid["q"]): number {
-  let sum = 0;
-  const o = table.fieldOffset[k];
-  for (let j = 0; j < q.n; j++) {
-    model.facing.surface(table.fieldRe[o + j], table.fieldIm[o + j]);
-    sum += q.weight[j] * obliqueAbsorption(model.facing.sr, model.facing.si, q.cos[j]);
-  }
-  return sum;
 }
 
 /** A map of at most `limit` entries, the oldest dropped first. */

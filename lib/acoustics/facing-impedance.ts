@@ -192,6 +192,40 @@ export class FacingImpedance {
   }
 
   /**
+   * Σ weight·α(θ) over angles from … to − 1 (cosines `cos`) for cavity impedances re, im (from
+   * offset) behind the facing, after `at(f)`: the field-incidence sum, written out on locals.
+   */
+  fieldSum(weight: ArrayLike<number>, cos: ArrayLike<number>, re: Float64Array, im: Float64Array, offset: number, from: number, to: number): number {
+    let sum = 0;
+    if (this.model === "lumped") {
+      const fr = this.zr;
+      const fi = this.zi;
+      for (let j = from; j < to; j++) {
+        const c = cos[j];
+        const a = (re[offset + j] + fr) * c;
+        const b = (im[offset + j] + fi) * c;
+        sum += (weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
+      }
+      return sum;
+    }
+    // Zs = N/D = (A·Zb + B)/(C·Zb + A): α = 4u·Re(N·conj D)/|N·u + D|², one division
+    const { ar, ai, br, bi, cr, ci } = this;
+    for (let j = from; j < to; j++) {
+      const zr = re[offset + j];
+      const zi = im[offset + j];
+      const nr = ar * zr - ai * zi + br;
+      const ni = ar * zi + ai * zr + bi;
+      const dr = cr * zr - ci * zi + ar;
+      const di = cr * zi + ci * zr + ai;
+      const c = cos[j];
+      const er = nr * c + dr;
+      const ei = ni * c + di;
+      sum += (weight[j] * 4 * c * (nr * dr + ni * di)) / (er * er + ei * ei);
+    }
+    return sum;
+  }
+
+  /**
    * The holes as a layer of thickness t between half the end terms e at each face:
    * Zs = e + Z_h·(Zb + e + j Z_h T)/(Z_h + j (Zb + e) T), T = tan(k_h t), which is the Möbius map
    * A = Z_h + j e T, B = 2 e Z_h + j T (Z_h² + e²), C = j T, D = A.

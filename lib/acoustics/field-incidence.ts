@@ -164,15 +164,16 @@ export class OpenCavityField {
    */
   value(rule: BaseRule, re: Float64Array, im: Float64Array, offset: number, facing: FacingImpedance, cavityAt: CavityAt, air: number | null, phase: number): number {
     this.extra = 0;
+    this.air = air;
     const { n, cos, weight } = rule;
     let sum = 0;
     const map = this.map;
     map.set(facing);
-    if (!map.sharpDipsPossible(this.u0)) return map.sum(weight, cos, re, im, offset, 0, n);
+    if (!map.sharpDipsPossible(this.u0)) return facing.fieldSum(weight, cos, re, im, offset, 0, n);
     if (this.panelSum.length < rule.panels) this.panelSum = new Float64Array(rule.panels);
     if (air !== null && map.lumped) {
       for (let p = 0; p < rule.panels; p++) {
-        const part = map.sum(weight, cos, re, im, offset, p * NODES_PER_PANEL, (p + 1) * NODES_PER_PANEL);
+        const part = facing.fieldSum(weight, cos, re, im, offset, p * NODES_PER_PANEL, (p + 1) * NODES_PER_PANEL);
         this.panelSum[p] = part;
         sum += part;
       }
@@ -295,8 +296,7 @@ export class OpenCavityField {
     const one = this.one;
     one.cos[0] = u;
     one.sin2[0] = 1 - u * u;
-    cavityAt(one.cos, one.sin2, 1, one.re, one.im);
-    this.extra++;
+    this.cavity(one, 1, cavityAt);
     this.map.variable(one.re[0], one.im[0], u, x);
     const p = Math.atan2(x.im, x.re);
     const same = (p > 0) === (a > 0);
@@ -333,6 +333,28 @@ export class OpenCavityField {
     const inside = span > 0 ? crossing > end : crossing < end;
     const g = inside ? width : Math.abs(crossing - end) + width;
     return this.push(inside ? crossing : end, g, g < RESOLVED * Math.abs(span));
+  }
+
+  /** the cavity's phase per unit of u when it is air alone, else null (of the current call) */
+  private air: number | null = null;
+
+  /**
+   * Cavity impedances at the scratch's n angles: of air alone on the backing, −j·cot(k·D·u)/u
+   * in closed form (the layered model's back layer, without a call into it); else the model's.
+   */
+  private cavity(s: Scratch, n: number, cavityAt: CavityAt): void {
+    this.extra += n;
+    const air = this.air;
+    if (air === null) {
+      cavityAt(s.cos, s.sin2, n, s.re, s.im);
+      return;
+    }
+    for (let i = 0; i < n; i++) {
+      const u = s.cos[i];
+      const t = Math.tan(0.5 * air * u);
+      s.re[i] = 0;
+      s.im[i] = -1 / (u * (Math.abs(t) < 1e-12 ? 1e-12 : t));
+    }
   }
 
   /** Record a dip (in ascending u); returns whether it is narrow. */
@@ -430,10 +452,8 @@ export class OpenCavityField {
       // du/dτ = g·cosh τ
       pc.w[i] = ((span / 2) * w[i] * g * 0.5 * (e + 1 / e) * 2 * u) / this.norm;
     }
-    cavityAt(pc.cos, pc.sin2, count, pc.re, pc.im);
-    this.extra += count;
-    let sum = 0;
-    return this.map.sum(pc.w, pc.cos, pc.re, pc.im, 0, 0, count);
+    this.cavity(pc, count, cavityAt);
+    return this.map.facing.fieldSum(pc.w, pc.cos, pc.re, pc.im, 0, 0, count);
   }
 }
 
@@ -473,23 +493,6 @@ class FacingMap {
   set(facing: FacingImpedance): void {
     this.f = facing;
     this.lumped = facing.model === "lumped";
-  }
-
-  /** Σ weight·α over nodes from … to − 1 of the cavity impedances re, im (from offset). */
-  sum(weight: Float64Array, cos: Float64Array, re: Float64Array, im: Float64Array, offset: number, from: number, to: number): number {
-    let sum = 0;
-    if (this.lumped) {
-      const { br, bi } = this.f;
-      for (let i = from; i < to; i++) {
-        const u = cos[i];
-        const a = (re[offset + i] + br) * u;
-        const b = (im[offset + i] + bi) * u;
-        sum += (weight[i] * 4 * a) / ((a + 1) * (a + 1) + b * b);
-      }
-      return sum;
-    }
-    for (let i = from; i < to; i++) sum += weight[i] * this.alpha(re[offset + i], im[offset + i], cos[i]);
-    return sum;
   }
 
   /**
@@ -548,23 +551,6 @@ class FacingMap {
 
   /** the largest |X|² met by sumAndLargest since it was last reset */
   largest = 0;
-
-  /** α at angle θ (u = cosθ) in front of a cavity of impedance zr + j zi. */
-  alpha(zr: number, zi: number, u: number): number {
-    if (this.lumped) {
-      const a = (zr + this.f.br) * u;
-      const b = (zi + this.f.bi) * u;
-      return (4 * a) / ((a + 1) * (a + 1) + b * b);
-    }
-    // Zs = N/D: α = 4u·Re(N·conj D)/|N·u + D|²
-    const nr = this.f.ar * zr - this.f.ai * zi + this.f.br;
-    const ni = this.f.ar * zi + this.f.ai * zr + this.f.bi;
-    const dr = this.f.cr * zr - this.f.ci * zi + this.f.ar;
-    const di = this.f.cr * zi + this.f.ci * zr + this.f.ai;
-    const er = nr * u + dr;
-    const ei = ni * u + di;
-    return (4 * u * (nr * dr + ni * di)) / (er * er + ei * ei);
-  }
 
   terms(u: number, inverse: number): void {
     if (this.lumped) {

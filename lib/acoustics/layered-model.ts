@@ -98,7 +98,7 @@ export class LayeredModel {
   /** Extended reaction: field-incidence absorption with every layer at each angle. */
   fieldAbsorption(q: Quadrature): number {
     this.layerImpedances(q.cos, q.sin2, q.n);
-    return fieldSum(this.re, this.im, 0, this.facing, q);
+    return this.facing.fieldSum(q.weight, q.cos, this.re, this.im, 0, 0, q.n);
   }
 
   /** The cavity alone (no facing) at n angles (cosines, squared sines), copied into re, im from offset. */
@@ -207,39 +207,4 @@ export class LayeredModel {
       }
     }
   }
-}
-
-/**
- * Σ weight·α(θ) over the angles of q for cavity impedances re, im (from offset) behind the
- * facing (after its `at(f)`).
- */
-export function fieldSum(re: Float64Array, im: Float64Array, offset: number, facing: FacingImpedance, q: Quadrature): number {
-  let sum = 0;
-  if (facing.model === "lumped") {
-    const fr = facing.zr;
-    const fi = facing.zi;
-    for (let j = 0; j < q.n; j++) {
-      const c = q.cos[j];
-      const a = (re[offset + j] + fr) * c;
-      const b = (im[offset + j] + fi) * c;
-      sum += (q.weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
-    }
-    return sum;
-  }
-  // Zs = (A·Zb + B)/(C·Zb + A), written out on locals
-  const { ar, ai, br, bi, cr, ci } = facing;
-  for (let j = 0; j < q.n; j++) {
-    const zr = re[offset + j];
-    const zi = im[offset + j];
-    const nr = ar * zr - ai * zi + br;
-    const ni = ar * zi + ai * zr + bi;
-    const dr = cr * zr - ci * zi + ar;
-    const di = cr * zi + ci * zr + ai;
-    // α = 4u·Re(N·conj D)/|N·u + D|², one division
-    const c = q.cos[j];
-    const er = nr * c + dr;
-    const ei = ni * c + di;
-    sum += (q.weight[j] * 4 * c * (nr * dr + ni * di)) / (er * er + ei * ei);
-  }
-  return sum;
 }
