@@ -130,6 +130,8 @@ export class OpenCavityField {
   /** Y, of the argument of X = −r·R_c/s, at each node */
   private yr = new Float64Array(64);
   private yi = new Float64Array(64);
+  /** |ζu + 1|²·|s|² at each node: |X| = |Y| / it */
+  private yd = new Float64Array(64);
   /** the maps' centres and half-widths in u, and whether each is too narrow for the base rule */
   private dipU = new Float64Array(16);
   private dipG = new Float64Array(16);
@@ -182,13 +184,9 @@ export class OpenCavityField {
     if (this.yr.length < n) {
       this.yr = new Float64Array(n);
       this.yi = new Float64Array(n);
+      this.yd = new Float64Array(n);
     }
-    map.largest = 0;
-    for (let p = 0; p < rule.panels; p++) {
-      const part = map.sumAndLargest(rule, re, im, offset, p * NODES_PER_PANEL, (p + 1) * NODES_PER_PANEL);
-      this.panelSum[p] = part;
-      sum += part;
-    }
+    sum = map.scan(rule, re, im, offset, this.panelSum, this.yr, this.yi, this.yd);
     // |X| = |R_c|·|r/s| below BROAD at every node: the cavity damps every dip broad
     if (map.largest < BROAD * BROAD) return sum;
     // nor can any dip be narrow whose least half-width (1 − m)/√m at the largest |X| met, over
@@ -196,7 +194,6 @@ export class OpenCavityField {
     // taken at three angles with a margin of 3), spans RESOLVED of the widest node gap
     const widest = (0.19 * (1 - this.u0)) / rule.panels;
     if (halfWidth(Math.sqrt(map.largest)) / (phase + 3 * map.phaseSlope(this.u0)) >= RESOLVED * widest) return sum;
-    map.directions(rule, re, im, offset, this.yr, this.yi);
     return this.findDips(rule, re, im, offset, cavityAt) ? this.rebuilt(rule.panels, cavityAt) : sum;
   }
 
@@ -269,34 +266,40 @@ export class OpenCavityField {
     this.dips = 0;
     let narrow = false;
     // between an end and the outermost node, or just beyond the end: extrapolated from the two outermost nodes
-    if (n > 1) narrow = this.endDip(cos, 0, 1, this.u0, re[offset], im[offset]) || narrow;
+    if (n > 1) narrow = this.endDip(cos, 0, 1, this.u0) || narrow;
     for (let i = 0; i + 1 < n; i++) {
       // arg X crosses 0 where Im X changes sign on the side Re X > 0 (on the other, ±π, |s + r R_c| is largest)
       if ((this.yi[i] > 0) === (this.yi[i + 1] > 0) || (this.yr[i] <= 0 && this.yr[i + 1] <= 0)) continue;
       const a = Math.atan2(this.yi[i], this.yr[i]);
       const b = Math.atan2(this.yi[i + 1], this.yr[i + 1]);
       if (Math.abs(a - b) >= Math.PI) continue;
-      narrow = this.crossing(cos[i], a, cos[i + 1], b, re[offset + i], im[offset + i], re[offset + i + 1], im[offset + i + 1], cavityAt) || narrow;
+      narrow = this.crossing(cos, i, a, b, cavityAt) || narrow;
     }
-    if (n > 1) narrow = this.endDip(cos, n - 1, n - 2, 1, re[offset + n - 1], im[offset + n - 1]) || narrow;
+    if (n > 1) narrow = this.endDip(cos, n - 1, n - 2, 1) || narrow;
     return narrow;
   }
 
-  /** A crossing of arg X = 0 between ua and ub: one secant step, then the dip's centre and half-width. */
-  private crossing(ua: number, a: number, ub: number, b: number, zar: number, zai: number, zbr: number, zbi: number, cavityAt: CavityAt): boolean {
+  /** |X| at node i of the last scan. */
+  private nodeX(i: number): number {
+    return Math.sqrt(this.yr[i] * this.yr[i] + this.yi[i] * this.yi[i]) / this.yd[i];
+  }
+
+  /**
+   * A crossing of arg X = 0 between nodes i and i + 1 (arg X = a, b there): one secant step,
+   * then the dip's centre and half-width.
+   */
+  private crossing(cos: Float64Array, i: number, a: number, b: number, cavityAt: CavityAt): boolean {
+    const ua = cos[i];
+    const ub = cos[i + 1];
     let u = ua + ((ub - ua) * a) / (a - b);
     // a dip clearly broad by the nodes' own |X| (the larger, the narrower) needs no closer look
-    const x = X_SCRATCH;
-    this.map.variable(zar, zai, ua, x);
-    const ma = Math.sqrt(x.re * x.re + x.im * x.im);
-    this.map.variable(zbr, zbi, ub, x);
-    const mb = Math.sqrt(x.re * x.re + x.im * x.im);
-    const rough = (halfWidth(Math.max(ma, mb)) * (ub - ua)) / Math.abs(a - b);
+    const rough = (halfWidth(Math.max(this.nodeX(i), this.nodeX(i + 1))) * (ub - ua)) / Math.abs(a - b);
     if (rough >= 2 * RESOLVED * (ub - ua)) return this.push(u, rough, false);
     const one = this.one;
     one.cos[0] = u;
     one.sin2[0] = 1 - u * u;
     this.cavity(one, 1, cavityAt);
+    const x = X_SCRATCH;
     this.map.variable(one.re[0], one.im[0], u, x);
     const p = Math.atan2(x.im, x.re);
     const same = (p > 0) === (a > 0);
@@ -313,7 +316,7 @@ export class OpenCavityField {
    * crossing if it lies within the range, else on the end, with the scale of distance plus
    * half-width.
    */
-  private endDip(cos: Float64Array, outer: number, inner: number, end: number, zr: number, zi: number): boolean {
+  private endDip(cos: Float64Array, outer: number, inner: number, end: number): boolean {
     // arg X within ±π/2 at both nodes (Re X > 0), and tan(arg X) heading for 0 beyond the outer node
     if (this.yr[outer] <= 0 || this.yr[inner] <= 0) return false;
     const to = this.yi[outer] / this.yr[outer];
@@ -327,9 +330,7 @@ export class OpenCavityField {
     const crossing = cos[outer] - p / slope;
     // the extrapolated crossing must lie on the far side of the outer node
     if ((crossing > cos[outer]) === (span > 0)) return false;
-    const x = X_SCRATCH;
-    this.map.variable(zr, zi, cos[outer], x);
-    const width = halfWidth(Math.sqrt(x.re * x.re + x.im * x.im)) / Math.abs(slope);
+    const width = halfWidth(this.nodeX(outer)) / Math.abs(slope);
     const inside = span > 0 ? crossing > end : crossing < end;
     const g = inside ? width : Math.abs(crossing - end) + width;
     return this.push(inside ? crossing : end, g, g < RESOLVED * Math.abs(span));
@@ -496,60 +497,67 @@ class FacingMap {
   }
 
   /**
-   * Σ weight·α over nodes from … to − 1, keeping in `largest` the largest |X|² = |R_c|²·|r/s|²
-   * met, compared without a division: the hot loop ahead of the dip search.
+   * One pass over the base rule's nodes, all the dip search reads: Σ weight·α panel by panel
+   * (into panelSum, the total returned), the largest |X|² = |R_c|²·|r/s|² met (into `largest`,
+   * compared without a division), Y, of the argument of X (into yr, yi), and |ζu + 1|²·|s|²,
+   * by which |X| = |Y| / it (into yd).
    */
-  sumAndLargest(rule: BaseRule, re: Float64Array, im: Float64Array, offset: number, from: number, to: number): number {
+  scan(rule: BaseRule, re: Float64Array, im: Float64Array, offset: number, panelSum: Float64Array, yr: Float64Array, yi: Float64Array, yd: Float64Array): number {
     const { ar, ai, br, bi, cr, ci } = this.f;
     const lumped = this.lumped;
-    const { cos, weight, inverse } = rule;
-    let sum = 0;
-    let most = this.largest;
-    for (let i = from; i < to; i++) {
-      const zr = re[offset + i];
-      const zi = im[offset + i];
-      const u = cos[i];
-      // r and s at u (A = D): s = 2A + uB + C/u, r = −uB + C/u
-      let rr: number;
-      let ri: number;
-      let qr: number;
-      let qi: number;
-      if (lumped) {
-        const a = (zr + br) * u;
-        const b = (zi + bi) * u;
-        sum += (weight[i] * 4 * a) / ((a + 1) * (a + 1) + b * b);
-        rr = -u * br;
-        ri = -u * bi;
-        qr = 2 - rr;
-        qi = -ri;
-      } else {
-        // Zs = N/D: α = 4u·Re(N·conj D)/|N·u + D|², one division
-        const nr = ar * zr - ai * zi + br;
-        const ni = ar * zi + ai * zr + bi;
-        const dr = cr * zr - ci * zi + ar;
-        const di = cr * zi + ci * zr + ai;
-        const er = nr * u + dr;
-        const ei = ni * u + di;
-        sum += (weight[i] * 4 * u * (nr * dr + ni * di)) / (er * er + ei * ei);
+    const { panels, cos, weight, inverse } = rule;
+    let total = 0;
+    let most = 0;
+    for (let p = 0, i = 0; p < panels; p++) {
+      let part = 0;
+      for (const end = i + NODES_PER_PANEL; i < end; i++) {
+        const zr = re[offset + i];
+        const zi = im[offset + i];
+        const u = cos[i];
+        if (lumped) {
+          const a = (zr + br) * u;
+          const b = (zi + bi) * u;
+          part += (weight[i] * 4 * a) / ((a + 1) * (a + 1) + b * b);
+        } else {
+          // Zs = N/D: α = 4u·Re(N·conj D)/|N·u + D|², one division
+          const nr = ar * zr - ai * zi + br;
+          const ni = ar * zi + ai * zr + bi;
+          const dr = cr * zr - ci * zi + ar;
+          const di = cr * zi + ci * zr + ai;
+          const er = nr * u + dr;
+          const ei = ni * u + di;
+          part += (weight[i] * 4 * u * (nr * dr + ni * di)) / (er * er + ei * ei);
+        }
+        // r = −uB + C/u, s = 2A + uB + C/u (A = D)
         const cu = cr * inverse[i];
         const ciu = ci * inverse[i];
-        rr = -u * br + cu;
-        ri = -u * bi + ciu;
-        qr = 2 * ar + u * br + cu;
-        qi = 2 * ai + u * bi + ciu;
+        const rr = -u * br + cu;
+        const ri = -u * bi + ciu;
+        const sr = 2 * ar + u * br + cu;
+        const si = 2 * ai + u * bi + ciu;
+        // |X|² = |ζu − 1|²·|r|² / (|ζu + 1|²·|s|²), R_c = (ζu − 1)/(ζu + 1)
+        const xr = zr * u;
+        const xi = zi * u;
+        const num = ((xr - 1) * (xr - 1) + xi * xi) * (rr * rr + ri * ri);
+        const den = ((xr + 1) * (xr + 1) + xi * xi) * (sr * sr + si * si);
+        if (num > most * den) most = num / den;
+        yd[i] = den;
+        // Y = −r·(ζu − 1)·conj(ζu + 1)·conj(s)
+        const pr = (xr - 1) * (xr + 1) + xi * xi;
+        const pi = 2 * xi;
+        const tr = -(rr * pr - ri * pi);
+        const ti = -(rr * pi + ri * pr);
+        yr[i] = tr * sr + ti * si;
+        yi[i] = ti * sr - tr * si;
       }
-      // |X|² = |ζu − 1|²·|r|² / (|ζu + 1|²·|s|²), R_c = (ζu − 1)/(ζu + 1)
-      const xr = zr * u;
-      const xi = zi * u;
-      const num = ((xr - 1) * (xr - 1) + xi * xi) * (rr * rr + ri * ri);
-      const den = ((xr + 1) * (xr + 1) + xi * xi) * (qr * qr + qi * qi);
-      if (num > most * den) most = num / den;
+      panelSum[p] = part;
+      total += part;
     }
     this.largest = most;
-    return sum;
+    return total;
   }
 
-  /** the largest |X|² met by sumAndLargest since it was last reset */
+  /** the largest |X|² met by the last scan */
   largest = 0;
 
   terms(u: number, inverse: number): void {
@@ -623,31 +631,6 @@ class FacingMap {
     const qi = -(this.rr * pi + this.ri * pr);
     out.re = qr * this.sr + qi * this.si;
     out.im = qi * this.sr - qr * this.si;
-  }
-
-  /** `direction` at every node of the rule, written out on locals: Y into yr, yi. */
-  directions(rule: BaseRule, re: Float64Array, im: Float64Array, offset: number, yr: Float64Array, yi: Float64Array): void {
-    const { ar, ai, br, bi, cr, ci } = this.f;
-    const { n, cos, inverse } = rule;
-    for (let i = 0; i < n; i++) {
-      const u = cos[i];
-      const xr = re[offset + i] * u;
-      const xi = im[offset + i] * u;
-      // (ζu − 1)·conj(ζu + 1)
-      const pr = (xr - 1) * (xr + 1) + xi * xi;
-      const pi = 2 * xi;
-      // r = −uB + C/u, s = 2A + uB + C/u
-      const cu = cr * inverse[i];
-      const ciu = ci * inverse[i];
-      const rr = -u * br + cu;
-      const ri = -u * bi + ciu;
-      const sr = 2 * ar + u * br + cu;
-      const si = 2 * ai + u * bi + ciu;
-      const tr = -(rr * pr - ri * pi);
-      const ti = -(rr * pi + ri * pr);
-      yr[i] = tr * sr + ti * si;
-      yi[i] = ti * sr - tr * si;
-    }
   }
 
   /** X = −r·R_c/s at angle u for a cavity of impedance zr + j zi. */
