@@ -171,7 +171,7 @@ export class OpenCavityField {
     let sum = 0;
     const map = this.map;
     map.set(facing);
-    if (!map.sharpDipsPossible(this.u0)) return facing.fieldSum(weight, cos, re, im, offset, 0, n);
+    if (map.lumped && !map.sharpDipsPossible(this.u0)) return facing.fieldSum(weight, cos, re, im, offset, 0, n);
     if (this.panelSum.length < rule.panels) this.panelSum = new Float64Array(rule.panels);
     if (air !== null && map.lumped) {
       for (let p = 0; p < rule.panels; p++) {
@@ -192,8 +192,10 @@ export class OpenCavityField {
     // nor can any dip be narrow whose least half-width (1 − m)/√m at the largest |X| met, over
     // the steepest arg X can turn (the cavity's phase bound `phase` plus the facing's own turn,
     // taken at three angles with a margin of 3), spans RESOLVED of the widest node gap
+    // (the facing's turn only looked at when the cavity's phase alone would pass)
     const widest = (0.19 * (1 - this.u0)) / rule.panels;
-    if (halfWidth(Math.sqrt(map.largest)) / (phase + 3 * map.phaseSlope(this.u0)) >= RESOLVED * widest) return sum;
+    const least = halfWidth(Math.sqrt(map.largest));
+    if (least >= RESOLVED * widest * phase && least >= RESOLVED * widest * (phase + 3 * map.phaseSlope(this.u0))) return sum;
     return this.findDips(rule, re, im, offset, cavityAt) ? this.rebuilt(rule.panels, cavityAt) : sum;
   }
 

@@ -95,34 +95,43 @@ export function findPeak(model: LayeredModel, upper: number, known?: KnownAbsorp
   return result;
 }
 
-/** Brent's method on the two cells around bracket point i (the cell next to an end point too). */
+/**
+ * Brent's method on the two cells around bracket point i (the cell next to an end point too),
+ * started from the bracket's own three points and their known values: its first step is the
+ * parabola through them, and no point is evaluated twice.
+ */
 function refine(model: LayeredModel, i: number, count: number, lower: number, upper: number): Peak {
-  const a = lnF[Math.max(i - 1, 0)];
-  const b = lnF[Math.min(i + 1, count - 1)];
-  const x = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), a, b);
-  if (b - x < 10 * TOLERANCE && i === count - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
-  if (x - a < 10 * TOLERANCE && i === 0) return { f: lower, alpha: model.normalAbsorption(lower), atLimit: false, atLowerLimit: true };
-  const f = Math.exp(x);
-  return { f, alpha: model.normalAbsorption(f), atLimit: false, atLowerLimit: false };
+  const lo = Math.max(i - 1, 0);
+  const hi = Math.min(i + 1, count - 1);
+  const best = brentMinimum((lf) => -model.normalAbsorption(Math.exp(lf)), lnF[lo], lnF[hi], lnF[i], -alphaAt[i], -alphaAt[lo], -alphaAt[hi]);
+  const x = best.x;
+  if (lnF[hi] - x < 10 * TOLERANCE && i === count - 1) return { f: upper, alpha: model.normalAbsorption(upper), atLimit: true, atLowerLimit: false };
+  if (x - lnF[lo] < 10 * TOLERANCE && i === 0) return { f: lower, alpha: model.normalAbsorption(lower), atLimit: false, atLowerLimit: true };
+  return { f: Math.exp(x), alpha: -best.fx, atLimit: false, atLowerLimit: false };
 }
 
-/** Brent's minimisation of g on [a, b]. */
-function brentMinimum(g: (x: number) => number, lo: number, hi: number): number {
+/**
+ * Brent's minimisation of g on [lo, hi] from a point x0 inside with g(x0) = f0 no greater than
+ * the values flo, fhi at the ends (which serve as the first two earlier points).
+ */
+function brentMinimum(g: (x: number) => number, lo: number, hi: number, x0: number, f0: number, flo: number, fhi: number): { x: number; fx: number } {
   let a = lo;
   let b = hi;
-  let x = a + CGOLD * (b - a);
-  let w = x;
-  let v = x;
-  let fx = g(x);
-  let fw = fx;
-  let fv = fx;
+  let x = x0;
+  let fx = f0;
+  // the earlier points: the better end, then the other
+  let w = flo <= fhi ? lo : hi;
+  let fw = flo <= fhi ? flo : fhi;
+  let v = flo <= fhi ? hi : lo;
+  let fv = flo <= fhi ? fhi : flo;
   let d = 0;
-  let e = 0;
+  // as if the step before last spanned the bracket: the first step may be the parabola
+  let e = b - a;
   for (let iter = 0; iter < 100; iter++) {
     const xm = 0.5 * (a + b);
     if (Math.abs(x - xm) <= 2 * TOLERANCE - 0.5 * (b - a)) break;
     let golden = true;
-    if (Math.abs(e) > TOLERANCE) {
+    if (Math.abs(e) > TOLERANCE && x !== w && x !== v && w !== v) {
       // parabola through x, w, v
       const r = (x - w) * (fx - fv);
       let q = (x - v) * (fx - fw);
@@ -147,19 +156,25 @@ function brentMinimum(g: (x: number) => number, lo: number, hi: number): number 
     if (fu <= fx) {
       if (u >= x) a = x;
       else b = x;
-      [v, w, x] = [w, x, u];
-      [fv, fw, fx] = [fw, fx, fu];
+      v = w;
+      fv = fw;
+      w = x;
+      fw = fx;
+      x = u;
+      fx = fu;
     } else {
       if (u < x) a = u;
       else b = u;
       if (fu <= fw || w === x) {
-        [v, w] = [w, u];
-        [fv, fw] = [fw, fu];
+        v = w;
+        fv = fw;
+        w = u;
+        fw = fu;
       } else if (fu <= fv || v === x || v === w) {
         v = u;
         fv = fu;
       }
     }
   }
-  return x;
+  return { x, fx };
 }
