@@ -77,7 +77,7 @@ export function fillFromTable(model: LayeredModel, table: CavityTable, grid: Spe
     const zi = facing.si;
     normal[k] = obliqueAbsorption(zr, zi, 1);
     if (!open) diffuse[k] = locallyReactingField(zr, zi, q);
-    else if (grid.adaptive) diffuse[k] = open.value(frequencies[k], { re: table.fieldRe, im: table.fieldIm, offset: table.fieldOffset[k] });
+    else if (grid.adaptive) diffuse[k] = open.fromTable(frequencies[k], table.fieldRe, table.fieldIm, table.fieldOffset[k]);
     else diffuse[k] = facing.fieldSum(q.weight, q.cos, table.fieldRe, table.fieldIm, table.fieldOffset[k], 0, q.n);
   }
 }

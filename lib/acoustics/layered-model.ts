@@ -23,6 +23,7 @@ import { porousCharacteristics } from "./porous";
 const TINY = 1e-12;
 const NORMAL_COS = Float64Array.of(1);
 const NORMAL_SIN2 = Float64Array.of(0);
+const NONE = new Float64Array(0);
 
 export class LayeredModel {
   /** normalised surface impedance at normal incidence after `impedance()` */
@@ -45,8 +46,9 @@ export class LayeredModel {
   /** the cavity's depth when it is air alone (no infill), else null */
   readonly airOnly: number | null;
   private k0 = 0;
-  private re = new Float64Array(16);
-  private im = new Float64Array(16);
+  // grown to the most angles asked for (none when a cavity table serves)
+  private re = NONE;
+  private im = NONE;
 
   constructor(facing: Facing | null, layers: Layer[], air: Air, facingModel?: FacingModel) {
     this.layers = layers.filter((layer) => layer.thickness > 0);

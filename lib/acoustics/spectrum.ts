@@ -61,27 +61,33 @@ export class OpenFieldRunner {
     return this.field.rule((2 * Math.PI * f) / this.model.c, this.model.depth);
   }
 
-  /**
-   * The field value at f: after model.setFrequency(f), computed here; or, after the facing's
-   * at(f) alone, from cavity impedances given at the rule's nodes (a cavity table).
-   */
-  value(f: number, given?: { re: Float64Array; im: Float64Array; offset: number }): number {
+  /** The field value at f, after model.setFrequency(f). */
+  value(f: number): number {
     const rule = this.rule(f);
-    // 2·k·D: the cavity's phase per unit of u, exact for air alone and a bound with infill
-    const phase = (4 * Math.PI * f * this.model.depth) / this.model.c;
-    const air = this.model.airOnly === null ? null : phase;
-    if (given) {
-      this.pending = f;
-      const value = this.field.value(rule, given.re, given.im, given.offset, this.model.facing, this.cavityAt, air, phase);
-      this.pending = 0;
-      return value;
-    }
     if (scratchRe.length < rule.n) {
       scratchRe = new Float64Array(rule.n);
       scratchIm = new Float64Array(rule.n);
     }
     this.model.cavityImpedances(rule.cos, rule.sin2, rule.n, scratchRe, scratchIm, 0);
-    return this.field.value(rule, scratchRe, scratchIm, 0, this.model.facing, this.cavityAt, air, phase);
+    return this.integrate(f, rule, scratchRe, scratchIm, 0);
+  }
+
+  /**
+   * The field value at f, after the facing's at(f) alone, from cavity impedances at the rule's
+   * nodes kept in a table (re, im from offset): the cavity is set to the frequency only if the
+   * rule needs more angles.
+   */
+  fromTable(f: number, re: Float64Array, im: Float64Array, offset: number): number {
+    this.pending = f;
+    const value = this.integrate(f, this.rule(f), re, im, offset);
+    this.pending = 0;
+    return value;
+  }
+
+  private integrate(f: number, rule: BaseRule, re: Float64Array, im: Float64Array, offset: number): number {
+    // 2·k·D: the cavity's phase per unit of u, exact for air alone and a bound with infill
+    const phase = (4 * Math.PI * f * this.model.depth) / this.model.c;
+    return this.field.value(rule, re, im, offset, this.model.facing, this.cavityAt, this.model.airOnly === null ? null : phase, phase);
   }
 
   /** evaluations beyond the base rule at the last frequency */
