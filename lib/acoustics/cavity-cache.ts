@@ -12,7 +12,6 @@ import { FACING_STATE as STATE, type FacingImpedance } from "./facing-impedance"
 
 /** a local copy: an imported binding is read through a getter in some module loaders */
 const FACING_STATE = STATE;
-import { cavityLayers } from "./build-up";
 import { locallyReactingField, obliqueAbsorption } from "./incidence";
 import type { LayeredModel } from "./layered-model";
 import { OpenFieldRunner, type SpectrumGrid } from "./spectrum";
@@ -82,39 +81,92 @@ export function fillFromTable(model: LayeredModel, table: CavityTable, grid: Spe
   }
 }
 
-/** A map of at most `limit` entries, the oldest dropped first. */
-class Bounded<T> {
-  private readonly entries = new Map<string, T>();
+function sameFacing(a: Facing, b: Facing): boolean {
+  if (a.kind !== b.kind || a.thickness !== b.thickness) return false;
+  if (a.kind === "slots") return b.kind === "slots" && a.slotWidth === b.slotWidth && a.slotPitch === b.slotPitch;
+  return b.kind !== "slots" && a.holeDiameter === b.holeDiameter && a.pitch === b.pitch && a.grid === b.grid;
+}
 
-  constructor(private readonly limit: number) {}
+function sameInfill(a: Infill | null, b: Infill | null): boolean {
+  if (a === null || b === null) return a === b;
+  return a.thickness === b.thickness && a.flowResistivity === b.flowResistivity && a.position === b.position && a.model === b.model;
+}
 
-  get(key: string, build: () => T): T {
-    const hit = this.entries.get(key);
-    if (hit) return hit;
+interface CavityKey {
+  cavity: Cavity;
+  infill: Infill | null;
+}
+
+function sameCavity(a: CavityKey, b: CavityKey): boolean {
+  return a.cavity.depth === b.cavity.depth && a.cavity.partitioned === b.cavity.partitioned && sameInfill(a.infill, b.infill);
+}
+
+/** What a table was made for: compared field by field, not through a string. */
+interface Key<T> {
+  of: T;
+  c: number;
+  rho: number;
+  eta: number;
+  grid: SpectrumGrid;
+}
+
+/**
+ * At most `limit` tables, the newest first and the oldest dropped; looked up by comparing the
+ * numbers they were made for (a sweep's few dozen cavities and facings: a short scan, cheaper
+ * than writing each key out as a string).
+ */
+class Recent<T, V> {
+  private readonly keys: Key<T>[] = [];
+  private readonly values: V[] = [];
+
+  constructor(
+    private readonly limit: number,
+    private readonly same: (a: T, b: T) => boolean,
+    private readonly copy: (of: T) => T,
+  ) {}
+
+  get(of: T, air: Air, grid: SpectrumGrid, build: () => V): V {
+    for (let i = 0; i < this.keys.length; i++) {
+      const key = this.keys[i];
+      if (
+        key.c === air.c &&
+        key.rho === air.rho &&
+        key.eta === air.eta &&
+        key.grid.frequencies === grid.frequencies &&
+        key.grid.q === grid.q &&
+        key.grid.adaptive === grid.adaptive &&
+        key.grid.locallyReacting === grid.locallyReacting &&
+        this.same(key.of, of)
+      ) {
+        return this.values[i];
+      }
+    }
     const value = build();
-    if (this.entries.size >= this.limit) this.entries.delete(this.entries.keys().next().value as string);
-    this.entries.set(key, value);
+    // a copy: the caller may change its object afterwards
+    this.keys.unshift({ of: this.copy(of), c: air.c, rho: air.rho, eta: air.eta, grid });
+    this.values.unshift(value);
+    if (this.keys.length > this.limit) {
+      this.keys.pop();
+      this.values.pop();
+    }
     return value;
   }
 }
 
 export class CavityCache {
-  private readonly tables: Bounded<CavityTable>;
-  private readonly facings: Bounded<Float64Array>;
+  private readonly tables: Recent<CavityKey, CavityTable>;
+  private readonly facings: Recent<Facing, Float64Array>;
 
   constructor(limit = 64) {
-    this.tables = new Bounded(limit);
-    this.facings = new Bounded(limit);
+    this.tables = new Recent(limit, sameCavity, ({ cavity, infill }) => ({ cavity: { ...cavity }, infill: infill && { ...infill } }));
+    this.facings = new Recent(limit, sameFacing, (facing) => ({ ...facing }));
   }
 
   facing(facing: Facing, air: Air, grid: SpectrumGrid, build: () => Float64Array): Float64Array {
-    const { frequencies } = grid;
-    return this.facings.get(JSON.stringify([facing, air.c, air.rho, air.eta, frequencies.length, frequencies[0]]), build);
+    return this.facings.get(facing, air, grid, build);
   }
 
   table(cavity: Cavity, infill: Infill | null, air: Air, grid: SpectrumGrid, build: () => CavityTable): CavityTable {
-    const { frequencies, q } = grid;
-    const key = JSON.stringify([cavityLayers(cavity, infill), cavity.partitioned, air.c, air.rho, frequencies.length, frequencies[0], q.n, q.maxAngleDeg, grid.adaptive]);
-    return this.tables.get(key, build);
+    return this.tables.get({ cavity, infill }, air, grid, build);
   }
 }

@@ -142,4 +142,22 @@ describe("cavity cache", () => {
       { numRuns: 40 },
     );
   });
+
+  it("keeps a table for the values it was made for, not for the object passed in", () => {
+    const cache = new CavityCache();
+    const facing = { kind: "round-holes" as const, thickness: 0.012, holeDiameter: 0.008, pitch: 0.032, grid: "square" as const };
+    const cavity = { depth: 0.1, partitioned: false };
+    const infill = { thickness: 0.05, flowResistivity: 12000, position: "on-backing" as const, model: "delany-bazley" as const };
+    evaluateBuildUp({ facing, cavity, infill }, { cavityCache: cache });
+    // the same objects, changed in place after the tables were made
+    facing.holeDiameter = 0.005;
+    cavity.depth = 0.05;
+    infill.flowResistivity = 30000;
+    const cached = evaluateBuildUp({ facing, cavity, infill }, { cavityCache: cache });
+    const fresh = evaluateBuildUp({ facing: { ...facing }, cavity: { ...cavity }, infill: { ...infill } });
+    fresh.thirdOctaves.forEach((band, i) => {
+      expect(cached.thirdOctaves[i].normal).toBeCloseTo(band.normal, 12);
+      expect(cached.thirdOctaves[i].diffuse).toBeCloseTo(band.diffuse, 12);
+    });
+  });
 });
