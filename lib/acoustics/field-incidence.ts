@@ -352,12 +352,7 @@ export class OpenCavityField {
       cavityAt(s.cos, s.sin2, n, s.re, s.im);
       return;
     }
-    for (let i = 0; i < n; i++) {
-      const u = s.cos[i];
-      const t = Math.tan(0.5 * air * u);
-      s.re[i] = 0;
-      s.im[i] = -1 / (u * (Math.abs(t) < 1e-12 ? 1e-12 : t));
-    }
+    airCavity(air, s.cos, n, s.re, s.im, 0);
   }
 
   /** Record a dip (in ascending u); returns whether it is narrow. */
@@ -647,6 +642,20 @@ class FacingMap {
 }
 
 const X_SCRATCH = { re: 0, im: 0 };
+
+/**
+ * Normalised impedances of a cavity of air alone on a rigid backing at n angles (cosines u):
+ * −j·cot(k·D·u)/u, `air` = 2·k·D; into re, im from offset. The layered model's back layer in
+ * closed form, for the open-cavity rule's hot path.
+ */
+export function airCavity(air: number, cos: Float64Array, n: number, re: Float64Array, im: Float64Array, offset: number): void {
+  for (let i = 0; i < n; i++) {
+    const u = cos[i];
+    const t = Math.tan(0.5 * air * u);
+    re[offset + i] = 0;
+    im[offset + i] = -1 / (u * (Math.abs(t) < 1e-12 ? 1e-12 : t));
+  }
+}
 
 /** Half-width in phase of the dip of |1 − X|² where |X| = m < 1: (1 − m)/sqrt(m). */
 function halfWidth(m: number): number {

@@ -7,7 +7,7 @@
  */
 import { airProperties } from "./air";
 import { type BuildUp, cavityLayers } from "./build-up";
-import { type BaseRule, type OpenCavityField, openCavityField } from "./field-incidence";
+import { type BaseRule, type OpenCavityField, airCavity, openCavityField } from "./field-incidence";
 import { DEFAULT_ANGLES, FIELD_INCIDENCE_LIMIT_DEG, type Quadrature, fieldQuadrature, locallyReactingField, obliqueAbsorption } from "./incidence";
 import { LayeredModel } from "./layered-model";
 
@@ -68,7 +68,8 @@ export class OpenFieldRunner {
       scratchRe = new Float64Array(rule.n);
       scratchIm = new Float64Array(rule.n);
     }
-    this.model.cavityImpedances(rule.cos, rule.sin2, rule.n, scratchRe, scratchIm, 0);
+    if (this.model.airOnly === null) this.model.cavityImpedances(rule.cos, rule.sin2, rule.n, scratchRe, scratchIm, 0);
+    else airCavity(this.phase(f), rule.cos, rule.n, scratchRe, scratchIm, 0);
     return this.integrate(f, rule, scratchRe, scratchIm, 0);
   }
 
@@ -84,9 +85,13 @@ export class OpenFieldRunner {
     return value;
   }
 
+  /** 2·k·D: the cavity's phase per unit of u, exact for air alone and a bound with infill */
+  private phase(f: number): number {
+    return (4 * Math.PI * f * this.model.depth) / this.model.c;
+  }
+
   private integrate(f: number, rule: BaseRule, re: Float64Array, im: Float64Array, offset: number): number {
-    // 2·k·D: the cavity's phase per unit of u, exact for air alone and a bound with infill
-    const phase = (4 * Math.PI * f * this.model.depth) / this.model.c;
+    const phase = this.phase(f);
     return this.field.value(rule, re, im, offset, this.model.facing, this.cavityAt, this.model.airOnly === null ? null : phase, phase);
   }
 
