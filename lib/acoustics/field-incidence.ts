@@ -28,7 +28,7 @@
  *    the dip and spreading geometrically into its tails. The other panels keep their sums.
  * Where nothing is narrow, step 1 is the result: the fast path.
  */
-import { gaussLegendre } from "./incidence";
+import { type AngleRule, gaussLegendre } from "./incidence";
 import type { FacingImpedance } from "./facing-impedance";
 
 /** Gauss nodes per base panel. */
@@ -44,14 +44,9 @@ export const RESOLVED = 2;
  */
 export const BROAD = 0.3;
 
-export interface BaseRule {
+/** The composite rule in u = cosθ (ascending); weight = Gauss weight · 2u / sin²θm. */
+export interface BaseRule extends AngleRule {
   readonly panels: number;
-  readonly n: number;
-  /** u = cosθ, ascending */
-  readonly cos: Float64Array;
-  readonly sin2: Float64Array;
-  /** Gauss weight · 2u / sin²θm */
-  readonly weight: Float64Array;
   /** 1/u */
   readonly inverse: Float64Array;
 }

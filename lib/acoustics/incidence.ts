@@ -12,15 +12,19 @@
 export const FIELD_INCIDENCE_LIMIT_DEG = 78;
 export const DEFAULT_ANGLES = 16;
 
-export interface Quadrature {
+/** Angles of a field-incidence rule and their weights: Σ weight·α(θ) is the field-incidence value. */
+export interface AngleRule {
   readonly n: number;
-  readonly maxAngleDeg: number;
-  readonly theta: Float64Array;
   readonly cos: Float64Array;
   /** sin²θ, for the trace wavenumber k0·sinθ */
   readonly sin2: Float64Array;
-  /** Gauss weight · sin2θ / sin²θmax: Σ weight·α(θ) is the field-incidence value */
   readonly weight: Float64Array;
+}
+
+/** The fixed rule: Gauss–Legendre in θ, weight = Gauss weight · sin2θ / sin²θmax. */
+export interface Quadrature extends AngleRule {
+  readonly maxAngleDeg: number;
+  readonly theta: Float64Array;
 }
 
 /** Gauss–Legendre nodes and weights on [−1, 1], by Newton's method on P_n. */
