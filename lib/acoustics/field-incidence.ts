@@ -289,9 +289,10 @@ export class OpenCavityField {
     const ua = cos[i];
     const ub = cos[i + 1];
     let u = ua + ((ub - ua) * a) / (a - b);
-    // a dip clearly broad by the nodes' own |X| (the larger, the narrower) needs no closer look
+    // a dip clearly broad by the nodes' own |X| (the larger, the narrower) and the chord's slope
+    // needs no closer look: with a margin of half as much again for the slope at the crossing
     const rough = (halfWidth(Math.max(this.nodeX(i), this.nodeX(i + 1))) * (ub - ua)) / Math.abs(a - b);
-    if (rough >= 2 * RESOLVED * (ub - ua)) return this.push(u, rough, false);
+    if (rough >= 1.5 * RESOLVED * (ub - ua)) return this.push(u, rough, false);
     const one = this.one;
     one.cos[0] = u;
     one.sin2[0] = 1 - u * u;
