@@ -119,7 +119,7 @@ const ARTS_ROOMS: DemoRoom[] = [
     length: 18,
     width: 11,
     height: 3.6,
-    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "brick-unglazed", "wall-d": "plaster-on-masonry", ceiling: "painted-concrete", floor: "ceramic-tile" },
+    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "brick-unglazed", "wall-d": "plaster-on-masonry", ceiling: "painted-concrete", floor: "unpainted-concrete" },
     openings: {
       "wall-a": [{ kind: "glazing", name: "Shop front", x: 1, y: 0.2, width: 16, height: 2.6, material: "glass-large-pane" }],
       "wall-b": [{ kind: "door", name: "Door to kitchen", x: 8, y: 0, width: 1, height: 2.1, material: "timber-door" }],
@@ -137,7 +137,7 @@ const LIBRARY_ROOMS: DemoRoom[] = [
     length: 16,
     width: 8,
     height: 3.4,
-    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "plywood-on-battens", "wall-d": "plaster-on-masonry", ceiling: "painted-concrete", floor: "carpet-thin-on-concrete" },
+    finishes: { "wall-a": "plaster-on-masonry", "wall-b": "plaster-on-masonry", "wall-c": "plywood-on-battens", "wall-d": "plaster-on-masonry", ceiling: "painted-concrete", floor: "carpet-heavy-on-concrete" },
     openings: { "wall-a": [{ kind: "window", name: "Windows", x: 1, y: 0.9, width: 13, height: 1.8, material: "window-glass" }] },
     treatments: [],
   },

@@ -1,5 +1,8 @@
 import type { EvaluateOutput } from "@/lib/acoustics/contract";
 
+/** ISO 11654 reports αp at 125 Hz; its reference curve, and so αw, starts at 250 Hz. */
+const UNRATED_OCTAVE = "125";
+
 const pct = (x: number) => `${(x * 100).toFixed(2)} %`;
 const hz = (x: number) => `${Math.round(x)} Hz`;
 
@@ -39,13 +42,15 @@ export function RatingsPanel({ result, stale }: { result: EvaluateOutput; stale:
           </tr>
           <tr>
             {Object.entries(r.alphaP).map(([f, v]) => (
-              <td key={f} className="figures text-center" data-testid={`alpha-p-${f}`}>
+              <td key={f} className={`figures text-center ${f === UNRATED_OCTAVE ? "text-ink-soft" : ""}`} data-testid={`alpha-p-${f}`}>
                 {v.toFixed(2)}
+                {f === UNRATED_OCTAVE && <sup aria-hidden>†</sup>}
               </td>
             ))}
           </tr>
         </tbody>
       </table>
+      <p className="mt-1 text-[11px] text-ink-faint">† 125 Hz is reported with the others but takes no part in αw, its shape letters or the class.</p>
     </div>
   );
 }

@@ -92,7 +92,7 @@ export function CheckPanel({ check, target, units }: { check: CheckResult; targe
             {target.nominal !== null && <p className="figures mt-1 text-sm">{target.nominal.toFixed(2)} s</p>}
             <p className="mt-2 text-xs leading-relaxed text-ink-soft">{target.note}</p>
             {target.source && <p className="mt-2 text-[11px] text-ink-faint">Source: {target.source}. {target.provenance}</p>}
-            {target.perOctave.some((b) => b.indicative) && <p className="mt-2 text-[11px] text-caution-deep">* indicative band, from memory; verify against the standard.</p>}
+            {target.perOctave.some((b) => b.indicative) && <p className="mt-2 text-[11px] text-caution-deep">* indicative band: not from the standard&apos;s text; verify against the standard.</p>}
           </Sheet>
         )}
       </div>

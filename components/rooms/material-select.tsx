@@ -1,14 +1,16 @@
 import type { MaterialView } from "@/lib/services/materials";
 import { FIELD_LABEL, FieldNote } from "@/components/ui/field";
 
-// Finishes grouped: the project's own first, then the built-in library (values marked
-// "typical, from memory" where they were recalled rather than checked).
+// Finishes grouped: the project's own first, then the built-in library, its published values
+// (book and table) apart from the few recalled from memory; the chosen finish's source shows
+// under the field, so a consultant sees where a number comes from before relying on it.
 type Props = { id: string; value: string; onChange: (key: string) => void; materials: MaterialView[]; error?: string; label: string; showLabel?: boolean };
 
 export function MaterialSelect({ id, value, onChange, materials, error, label, showLabel = false }: Props) {
   const own = materials.filter((m) => m.own);
-  const library = materials.filter((m) => !m.own);
-  const known = materials.some((m) => m.key === value);
+  const published = materials.filter((m) => !m.own && m.provenance !== "from memory");
+  const recalled = materials.filter((m) => !m.own && m.provenance === "from memory");
+  const chosen = materials.find((m) => m.key === value);
   return (
     <div className="flex min-w-0 flex-col gap-1">
       <label htmlFor={id} className={showLabel ? FIELD_LABEL : "sr-only"}>
@@ -18,12 +20,12 @@ export function MaterialSelect({ id, value, onChange, materials, error, label, s
         id={id}
         value={value}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        title={materials.find((m) => m.key === value)?.name}
+        aria-describedby={[error ? `${id}-error` : "", chosen ? `${id}-source` : ""].filter(Boolean).join(" ") || undefined}
+        title={chosen?.name}
         onChange={(e) => onChange(e.target.value)}
         className={`w-full rounded-sheet border bg-white/70 px-2 py-1.5 text-xs ${error ? "border-fault" : "border-paper-edge"}`}
       >
-        {!known && <option value={value}>{value} (unknown)</option>}
+        {!chosen && <option value={value}>{value} (unknown)</option>}
         {own.length > 0 && (
           <optgroup label="This project's materials">
             {own.map((m) => (
@@ -33,14 +35,28 @@ export function MaterialSelect({ id, value, onChange, materials, error, label, s
             ))}
           </optgroup>
         )}
-        <optgroup label="Library (typical values, from memory)">
-          {library.map((m) => (
+        <optgroup label="Library: published values">
+          {published.map((m) => (
             <option key={m.key} value={m.key}>
               {m.name}
             </option>
           ))}
         </optgroup>
+        {recalled.length > 0 && (
+          <optgroup label="Library: no published value found (from memory)">
+            {recalled.map((m) => (
+              <option key={m.key} value={m.key}>
+                {m.name} (from memory)
+              </option>
+            ))}
+          </optgroup>
+        )}
       </select>
+      {chosen && (
+        <p id={`${id}-source`} title={chosen.source} className={`truncate text-[10px] ${chosen.provenance === "from memory" ? "text-caution-deep" : "text-ink-faint"}`} data-testid="finish-source">
+          {chosen.short}
+        </p>
+      )}
       <FieldNote id={id} error={error} small />
     </div>
   );

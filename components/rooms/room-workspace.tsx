@@ -21,6 +21,7 @@ import { SaveNotices } from "@/components/ui/save-notices";
 import { TitleBlock } from "@/components/ui/sheet";
 import { RoomFirePanel } from "@/components/fire/room-fire-panel";
 import { CheckPanel } from "./check-panel";
+import { FinishSources } from "./finish-sources";
 import { RoomFieldsEditor } from "./room-fields-editor";
 import { SurfacesEditor } from "./surfaces-editor";
 import { TreatmentsEditor } from "./treatments-editor";
@@ -133,7 +134,12 @@ export function RoomWorkspace({ initial, materials, buildUps, units, mayEdit }: 
         {saved.openPins > 0 && <span className="ml-2 text-copper-deep">{saved.openPins} open {saved.openPins === 1 ? "pin" : "pins"}</span>}
       </nav>
       {live ? (
-        <CheckPanel check={live.check} target={live.target} units={units} />
+        <>
+          <CheckPanel check={live.check} target={live.target} units={units} />
+          <div className="mt-6">
+            <FinishSources surfaces={surfaces} materials={materials} />
+          </div>
+        </>
       ) : (
         <Notice tone="caution" title="Fix the marked fields to see the check">
           {errors.length} {errors.length === 1 ? "field needs" : "fields need"} attention below. Nothing has been saved or lost.

@@ -1,5 +1,6 @@
 /**
- * Atmospheric absorption of pure tones, ISO 9613-1:1993 (equations as in REFERENCES.md 8.2).
+ * Atmospheric absorption of pure tones, ISO 9613-1:1993: the relaxation frequencies of oxygen
+ * and nitrogen and the attenuation coefficient, as the standard gives them.
  * T in K, T0 = 293.15 K, T01 = 273.16 K, p_r = 101.325 kPa, humidity h_r in %.
  */
 import { KELVIN, STANDARD_PRESSURE } from "./air";

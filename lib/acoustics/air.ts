@@ -1,5 +1,5 @@
 /**
- * Properties of air (REFERENCES.md section 1, fixed in section 0).
+ * Properties of air.
  *
  * Speed of sound and density from the ideal gas law (Kinsler et al., Fundamentals of Acoustics,
  * ch. 5): c = sqrt(γ R T), ρ = p / (R T), γ = 1.4, R = 287.05 J/(kg·K).

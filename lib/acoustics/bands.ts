@@ -1,5 +1,5 @@
 /**
- * Frequency bands (IEC 61260 base-ten bands; REFERENCES.md section 0 for the averaging):
+ * Frequency bands (IEC 61260 base-ten bands; the averaging is Cavitas's own choice):
  * one-third octaves 50 Hz–5 kHz with exact centres fm = 1000·10^(k/10) and edges fm·10^(±1/20);
  * a band value is the mean over n frequencies at the log-midpoints of n equal log steps between
  * the edges (n = 7 by default); an octave value is the mean of its three one-third octaves.
@@ -52,6 +52,17 @@ export function thirdOctaveSamples(n = SAMPLES_PER_BAND): Float64Array {
   if (hit) return hit;
   const out = Float64Array.from(THIRD_OCTAVES.flatMap((band) => bandSamples(band, n)));
   sampleCache.set(n, out);
+  return out;
+}
+
+const logCache = new Map<number, Float64Array>();
+
+/** ln f of thirdOctaveSamples(n), for searches on a log axis. */
+export function thirdOctaveLogSamples(n = SAMPLES_PER_BAND): Float64Array {
+  const hit = logCache.get(n);
+  if (hit) return hit;
+  const out = Float64Array.from(thirdOctaveSamples(n), Math.log);
+  logCache.set(n, out);
   return out;
 }
 

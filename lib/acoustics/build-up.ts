@@ -63,7 +63,7 @@ export function facingOpenArea(facing: Facing): number {
 }
 
 /**
- * Total end correction (both sides) of the facing, as fixed in REFERENCES.md section 0:
+ * Total end correction (both sides) of the facing, the variant Cavitas fixes for each kind:
  * Fok 2δ for round holes, Maa's 0.85 d for micro-perforation, Smits–Kosten 2δ for slots.
  */
 export function facingEndCorrection(facing: Facing): number {

@@ -1,5 +1,5 @@
 /**
- * End corrections (REFERENCES.md sections 2, 3.3, 3.4 and 4; variants fixed in section 0).
+ * End corrections of necks, holes and slots; the sources are named with each below.
  */
 
 /** Rayleigh's radiation mass of a baffled piston: δ = 8a/(3π) ≈ 0.8488 a per flanged end. */

@@ -4,9 +4,9 @@
  * This is the fast core that the contract, the tuning bench and the design assistant call.
  */
 import { airProperties } from "./air";
-import { OCTAVE_LABELS, SAMPLES_PER_BAND, THIRD_OCTAVE_LABELS, bandMeans, octavesFromThirds, thirdOctaveSamples } from "./bands";
+import { OCTAVE_LABELS, SAMPLES_PER_BAND, THIRD_OCTAVE_LABELS, bandMeans, octavesFromThirds, thirdOctaveLogSamples, thirdOctaveSamples } from "./bands";
 import { type BuildUp, cavityLayers, effectiveThickness, facingOpenArea } from "./build-up";
-import { type CavityCache, cavityTable, fillFromTable } from "./cavity-cache";
+import { type CavityCache, cavityTable, facingTable, fillFromTable } from "./cavity-cache";
 import { lumpedPanelHz } from "./helmholtz";
 import { DEFAULT_ANGLES, FIELD_INCIDENCE_LIMIT_DEG, fieldQuadrature } from "./incidence";
 import { LayeredModel } from "./layered-model";
@@ -15,7 +15,10 @@ import { clampNegative, fillSpectrum, spectrumGrid } from "./spectrum";
 import { type Warning, buildUpWarnings } from "./warnings";
 
 export interface EvaluateOptions {
-  /** Gauss–Legendre points of the field-incidence integral (16) */
+  /**
+   * Gauss–Legendre points of the field-incidence integral of a partitioned cavity (16); given,
+   * an open cavity takes the same fixed rule in place of its resonance-resolving one
+   */
   angles?: number;
   /** upper limit of the field-incidence integral in degrees (78; 90 gives Paris' integral) */
   maxAngleDeg?: number;
@@ -52,14 +55,17 @@ export function evaluateBuildUp(buildUp: BuildUp, options: EvaluateOptions = {})
   const freqs = thirdOctaveSamples(n);
   const q = fieldQuadrature(options.angles ?? DEFAULT_ANGLES, options.maxAngleDeg ?? FIELD_INCIDENCE_LIMIT_DEG);
   const model = new LayeredModel(buildUp.facing, cavityLayers(buildUp.cavity, buildUp.infill), air);
-  const grid = spectrumGrid(freqs, q, buildUp.cavity.partitioned);
+  const grid = spectrumGrid(freqs, q, buildUp.cavity.partitioned, options.angles === undefined);
   if (options.cavityCache) {
     const table = options.cavityCache.table(buildUp.cavity, buildUp.infill, air, grid, () => cavityTable(model, grid));
-    fillFromTable(model.facing, table, grid);
+    const facing = options.cavityCache.facing(buildUp.facing, air, grid, () => facingTable(model.facing, grid));
+    fillFromTable(model, table, grid, facing);
   } else {
     fillSpectrum(model, grid);
   }
   const { normal, diffuse } = grid;
+  // the band samples bracket the peak search within their range (before negatives are set to 0)
+  const known = { f: freqs, lnF: thirdOctaveLogSamples(n), alpha: Float64Array.from(normal) };
   const clamped = Math.max(clampNegative(normal), clampNegative(diffuse));
 
   const normalBands = bandMeans(normal, n);
@@ -70,7 +76,7 @@ export function evaluateBuildUp(buildUp: BuildUp, options: EvaluateOptions = {})
   const openArea = facingOpenArea(buildUp.facing);
   const helmholtzHz = lumpedPanelHz(openArea, effectiveThickness(buildUp.facing), buildUp.cavity.depth, air.c);
   const quarterWaveHz = air.c / (4 * buildUp.cavity.depth);
-  const peak = options.peak === false ? null : findPeak(model, quarterWaveHz);
+  const peak = options.peak === false ? null : findPeak(model, quarterWaveHz, known);
 
   return {
     openArea,

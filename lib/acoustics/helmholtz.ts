@@ -1,5 +1,5 @@
 /**
- * Lumped Helmholtz estimates (REFERENCES.md sections 2 and 3.1).
+ * Lumped Helmholtz estimates of a perforated panel and of a single resonator.
  */
 import { type AirConditions, airProperties } from "./air";
 import { type Facing, effectiveThickness, facingOpenArea } from "./build-up";
@@ -20,7 +20,7 @@ export function panelHelmholtzHz(facing: Facing, depth: number, air: AirConditio
 
 /**
  * The same mass over the cavity without the low-frequency approximation cot(kD) ≈ 1/(kD):
- * the first root of ω t'/(ε c) = cot(ω D / c) (REFERENCES.md 3.1). Found by bisection on
+ * the first root of ω t'/(ε c) = cot(ω D / c), which always lies below it. Found by bisection on
  * (0, c/(4D)), where the left side rises and the right side falls.
  */
 export function cotRootHz(openArea: number, effectiveNeck: number, depth: number, c: number): number {

@@ -1,23 +1,30 @@
 /**
  * Angles of incidence. α(θ) = 1 − |(Zs cosθ − ρ0c)/(Zs cosθ + ρ0c)|², and the diffuse value by
  * Paris' integral (Paris 1928; Kuttruff, Room Acoustics) cut at a field-incidence limit and
- * normalised (REFERENCES.md section 6, fixed in section 0 at 0–78°, divided by sin²78°):
+ * normalised (0–78°, divided by sin²78°; the 78° limit is common practice, usually credited to
+ * London's 1950 transmission-loss work):
  *   α_field = ∫0^θmax α(θ) sin2θ dθ / sin²θmax
- * evaluated by a fixed Gauss–Legendre rule whose nodes, cosines and weights are computed once.
+ * For a locally reacting (partitioned) cavity the integrand is smooth and a fixed Gauss–Legendre
+ * rule, nodes, cosines and weights computed once, is exact to 10⁻⁶; an open cavity's rule is in
+ * field-incidence.ts.
  */
 
 export const FIELD_INCIDENCE_LIMIT_DEG = 78;
 export const DEFAULT_ANGLES = 16;
 
-export interface Quadrature {
+/** Angles of a field-incidence rule and their weights: Σ weight·α(θ) is the field-incidence value. */
+export interface AngleRule {
   readonly n: number;
-  readonly maxAngleDeg: number;
-  readonly theta: Float64Array;
   readonly cos: Float64Array;
   /** sin²θ, for the trace wavenumber k0·sinθ */
   readonly sin2: Float64Array;
-  /** Gauss weight · sin2θ / sin²θmax: Σ weight·α(θ) is the field-incidence value */
   readonly weight: Float64Array;
+}
+
+/** The fixed rule: Gauss–Legendre in θ, weight = Gauss weight · sin2θ / sin²θmax. */
+export interface Quadrature extends AngleRule {
+  readonly maxAngleDeg: number;
+  readonly theta: Float64Array;
 }
 
 /** Gauss–Legendre nodes and weights on [−1, 1], by Newton's method on P_n. */

@@ -11,6 +11,7 @@ export * from "./cavity-cache";
 export * from "./end-corrections";
 export * from "./evaluate";
 export * from "./facing-impedance";
+export * from "./field-incidence";
 export * from "./helmholtz";
 export * from "./incidence";
 export * from "./layered-model";

@@ -6,7 +6,8 @@
  * With a rigid backing the product matrix only matters through Zs = T11/T21, so the layers are
  * applied from the backing forwards as impedance translations, which is the same algebra with
  * fewer operations: the back layer gives −j Zz cot(kz d); each layer in front of a load Zb gives
- * Zz (Zb + j Zz tan(kz d)) / (Zz + j Zb tan(kz d)); the facing adds its impedance in series.
+ * Zz (Zb + j Zz tan(kz d)) / (Zz + j Zb tan(kz d)); the facing turns the cavity's Zb into Zs
+ * (in series when thin, as a layer of its own when thick: facing-impedance.ts).
  * Oblique incidence at trace wavenumber k0 sinθ: air kz = k0 cosθ, Zz = ρ0c/cosθ; porous
  * kz = sqrt(kc² − k0² sin²θ), Zz = Zc kc/kz.
  *
@@ -15,18 +16,22 @@
  */
 import type { Air } from "./air";
 import type { Facing, Layer } from "./build-up";
-import { FacingImpedance } from "./facing-impedance";
+import { FacingImpedance, type FacingModel } from "./facing-impedance";
 import type { Quadrature } from "./incidence";
 import { porousCharacteristics } from "./porous";
 
 const TINY = 1e-12;
 const NORMAL_COS = Float64Array.of(1);
 const NORMAL_SIN2 = Float64Array.of(0);
+const NONE = new Float64Array(0);
 
 export class LayeredModel {
   /** normalised surface impedance at normal incidence after `impedance()` */
   zr = 0;
   zi = 0;
+  /** the cavity's own impedance at normal incidence after `impedance()` */
+  cavityRe = 0;
+  cavityIm = 0;
   readonly facing: FacingImpedance;
   private readonly count: number;
   private readonly layers: Layer[];
@@ -34,25 +39,38 @@ export class LayeredModel {
   /** per porous layer: Zc.re, Zc.im, kc.re, kc.im at the current frequency */
   private readonly fluid: Float64Array;
   private readonly rho: number;
-  private readonly c: number;
+  /** speed of sound, m/s */
+  readonly c: number;
+  /** the whole cavity, facing to backing, m */
+  readonly depth: number;
+  /** the cavity's depth when it is air alone (no infill), else null */
+  readonly airOnly: number | null;
   private k0 = 0;
-  private re = new Float64Array(16);
-  private im = new Float64Array(16);
+  // grown to the most angles asked for (none when a cavity table serves)
+  private re = NONE;
+  private im = NONE;
 
-  constructor(facing: Facing | null, layers: Layer[], air: Air) {
+  constructor(facing: Facing | null, layers: Layer[], air: Air, facingModel?: FacingModel) {
     this.layers = layers.filter((layer) => layer.thickness > 0);
     this.count = this.layers.length;
     this.thickness = Float64Array.from(this.layers, (layer) => layer.thickness);
     this.fluid = new Float64Array(4 * this.count);
-    this.facing = new FacingImpedance(facing, air);
+    this.facing = new FacingImpedance(facing, air, facingModel);
     this.rho = air.rho;
     this.c = air.c;
+    this.depth = this.layers.reduce((sum, layer) => sum + layer.thickness, 0);
+    this.airOnly = this.count === 1 && this.layers[0].kind === "air" ? this.depth : null;
   }
 
   /** Prepare everything that depends on frequency only. */
   setFrequency(f: number): void {
-    this.k0 = (2 * Math.PI * f) / this.c;
     this.facing.at(f);
+    this.setCavityFrequency(f);
+  }
+
+  /** The cavity's part of setFrequency: for a caller that has set the facing itself. */
+  setCavityFrequency(f: number): void {
+    this.k0 = (2 * Math.PI * f) / this.c;
     for (let i = 0; i < this.count; i++) {
       const layer = this.layers[i];
       if (layer.kind === "porous") {
@@ -64,8 +82,11 @@ export class LayeredModel {
   /** Normal-incidence surface impedance into zr, zi. */
   impedance(): void {
     this.layerImpedances(NORMAL_COS, NORMAL_SIN2, 1);
-    this.zr = this.re[0] + this.facing.zr;
-    this.zi = this.im[0] + this.facing.zi;
+    this.cavityRe = this.re[0];
+    this.cavityIm = this.im[0];
+    this.facing.surface(this.cavityRe, this.cavityIm);
+    this.zr = this.facing.sr;
+    this.zi = this.facing.si;
   }
 
   /** Normal-incidence absorption at f. */
@@ -79,14 +100,16 @@ export class LayeredModel {
   /** Extended reaction: field-incidence absorption with every layer at each angle. */
   fieldAbsorption(q: Quadrature): number {
     this.layerImpedances(q.cos, q.sin2, q.n);
-    return fieldSum(this.re, this.im, 0, this.facing.zr, this.facing.zi, q);
+    return this.facing.fieldSum(q.weight, q.cos, this.re, this.im, 0, 0, q.n);
   }
 
-  /** The cavity alone (no facing) at the angles of q, copied into re, im from offset. */
-  cavityImpedances(q: Quadrature, re: Float64Array, im: Float64Array, offset: number): void {
-    this.layerImpedances(q.cos, q.sin2, q.n);
-    re.set(this.re.subarray(0, q.n), offset);
-    im.set(this.im.subarray(0, q.n), offset);
+  /** The cavity alone (no facing) at n angles (cosines, squared sines), copied into re, im from offset. */
+  cavityImpedances(cos: Float64Array, sin2: Float64Array, n: number, re: Float64Array, im: Float64Array, offset = 0): void {
+    this.layerImpedances(cos, sin2, n);
+    for (let j = 0; j < n; j++) {
+      re[offset + j] = this.re[j];
+      im[offset + j] = this.im[j];
+    }
   }
 
   /** Impedances of the layers on the backing at n angles (cosines, squared sines) into re, im. */
@@ -186,19 +209,4 @@ export class LayeredModel {
       }
     }
   }
-}
-
-/**
- * Σ weight·α(θ) over the angles of q for layer impedances re, im (from offset) in series with
- * a facing impedance fr + j fi.
- */
-export function fieldSum(re: Float64Array, im: Float64Array, offset: number, fr: number, fi: number, q: Quadrature): number {
-  let sum = 0;
-  for (let j = 0; j < q.n; j++) {
-    const c = q.cos[j];
-    const a = (re[offset + j] + fr) * c;
-    const b = (im[offset + j] + fi) * c;
-    sum += (q.weight[j] * 4 * a) / ((a + 1) * (a + 1) + b * b);
-  }
-  return sum;
 }

@@ -1,5 +1,5 @@
 /**
- * Open-area ratio of a perforated or slotted plate (REFERENCES.md 3.2, exact geometry).
+ * Open-area ratio of a perforated or slotted plate, from the exact geometry of each grid.
  * Round holes of diameter d at centre distance b:
  *   square grid              ε = π d² / (4 b²)
  *   60° staggered grid       ε = π d² / (2√3 b²)   (equilateral triangles, centre distance b)

@@ -2,9 +2,10 @@
  * Single-number ratings from one-third-octave absorption coefficients, computed in integer
  * hundredths so that no rounding rule depends on floating point.
  *
- * ISO 11654:1997: practical coefficient α_p per octave 250–4000 Hz = mean of its three
- * one-third octaves to two decimals, then to the nearest 0.05, capped at 1.00; the reference
- * curve (0.80, 1.00, 1.00, 1.00, 0.90) shifted in 0.05 steps until the unfavourable deviations
+ * ISO 11654:1997: practical coefficient α_p per octave 125–4000 Hz = mean of its three
+ * one-third octaves to two decimals, then to the nearest 0.05, capped at 1.00 (clause 4); the
+ * 125 Hz value is reported but takes no part in the rating. The reference curve (0.80, 1.00,
+ * 1.00, 1.00, 0.90 at 250–4000 Hz) is shifted in 0.05 steps until the unfavourable deviations
  * sum to ≤ 0.10; α_w = shifted curve at 500 Hz; shape indicators L/M/H where α_p exceeds the
  * curve by ≥ 0.25; classes A–E (Annex B).
  * ASTM C423: NRC = mean of 250, 500, 1000, 2000 Hz to the nearest 0.05 (ties round half up, a
@@ -15,7 +16,10 @@ import { ISO_354_LABELS } from "./bands";
 
 export type ThirdOctaveValues = Record<string, number>;
 
-export const ALPHA_P_LABELS = [250, 500, 1000, 2000, 4000] as const;
+/** Octaves with a practical coefficient α_p (ISO 11654 clause 4). */
+export const ALPHA_P_LABELS = [125, 250, 500, 1000, 2000, 4000] as const;
+/** Octaves of the reference curve, which set α_w and the shape indicators (125 Hz does not). */
+export const WEIGHTED_LABELS = [250, 500, 1000, 2000, 4000] as const;
 const REFERENCE_CURVE = [80, 100, 100, 100, 90];
 const NRC_LABELS = [250, 500, 1000, 2000];
 const SAA_LABELS = [200, 250, 315, 400, 500, 630, 800, 1000, 1250, 1600, 2000, 2500];
@@ -64,7 +68,8 @@ export function absorptionClass(alphaWHundredths: number): AbsorptionClass {
 
 /** Rate the eighteen ISO 354 one-third octaves 100–5000 Hz (keys are nominal labels). */
 export function rateThirdOctaves(values: ThirdOctaveValues): Ratings {
-  const practical = ALPHA_P_LABELS.map((label) => practicalHundredths(values, label));
+  const alphaP = ALPHA_P_LABELS.map((label) => practicalHundredths(values, label));
+  const practical = WEIGHTED_LABELS.map((label) => alphaP[ALPHA_P_LABELS.indexOf(label)]);
   let shift = 0;
   const unfavourable = (s: number) =>
     practical.reduce((sum, p, i) => sum + Math.max(0, REFERENCE_CURVE[i] + s - p), 0);
@@ -72,7 +77,7 @@ export function rateThirdOctaves(values: ThirdOctaveValues): Ratings {
   const alphaW = REFERENCE_CURVE[1] + shift;
   const shape = [...new Set(practical.flatMap((p, i) => (p - (REFERENCE_CURVE[i] + shift) >= 25 ? [SHAPE[i]] : [])))].join("");
   return {
-    alphaP: Object.fromEntries(ALPHA_P_LABELS.map((label, i) => [String(label), practical[i] / 100])),
+    alphaP: Object.fromEntries(ALPHA_P_LABELS.map((label, i) => [String(label), alphaP[i] / 100])),
     alphaW: alphaW / 100,
     shape,
     class: absorptionClass(alphaW),

@@ -1,5 +1,5 @@
 /**
- * Reverberation time per octave (REFERENCES.md 8.1, fixed in section 0):
+ * Reverberation time per octave:
  *   Sabine (Kuttruff, Room Acoustics, ch. 5): T = (24 ln10 / c)·V / (A + 4mV), A = Σ S_i α_i
  *   Eyring (JASA 1, 217, 1930):               T = (24 ln10 / c)·V / (−S ln(1 − ᾱ) + 4mV)
  * with c from the room's temperature and m from ISO 9613-1 at the exact mid-band frequency

@@ -12,7 +12,7 @@ export interface Warning {
   message: string;
 }
 
-/** Limits of every prediction (SPEC.md section 5); shown with results, not repeated as warnings. */
+/** Limits of every prediction; shown with results, not repeated as warnings. */
 export const MODEL_LIMITS = [
   "rigid facing: no panel vibration",
   "infinite panel: no edge or size effects",
@@ -21,9 +21,9 @@ export const MODEL_LIMITS = [
 
 /** The lumped estimate holds for small open area (Cox & D'Antonio ch. 7). */
 export const LUMPED_OPEN_AREA_LIMIT = 0.2;
-/** Warn when the lumped f0 lies this much above the exact cot root (REFERENCES.md 3.1, T11). */
+/** Warn when the lumped f0 lies this much above the exact root of ωt'/(εc) = cot(ωD/c), which it always exceeds. */
 export const LUMPED_OVERESTIMATE_LIMIT = 0.05;
-/** Fok's ψ is fitted up to √ε ≈ 0.5 (REFERENCES.md 3.3). */
+/** Fok's ψ is fitted up to √ε ≈ 0.5 (Fok 1941, as used by Melling, JSV 29(1), 1973). */
 export const FOK_OPEN_AREA_LIMIT = 0.25;
 /** Maa's theory is for sub-millimetre holes (Maa 1998). */
 export const MAA_MAX_HOLE = 1e-3;
@@ -45,7 +45,7 @@ export function buildUpWarnings({
   buildUp: BuildUp;
   air: Air;
   helmholtzHz: number;
-  peak: { f: number; atLimit: boolean } | null;
+  peak: { f: number; atLimit: boolean; atLowerLimit: boolean } | null;
   /** highest sample frequency where a negative absorption was set to 0, or null */
   clampedUpToHz: number | null;
 }): Warning[] {
@@ -111,6 +111,12 @@ export function buildUpWarnings({
     out.push({
       code: "no-peak",
       message: `normal-incidence absorption rises up to the quarter-wave frequency c/(4D) = ${hz(peak.f)}: no resonance peak below it, peakHz is that limit`,
+    });
+  }
+  if (peak?.atLowerLimit) {
+    out.push({
+      code: "peak-below-range",
+      message: `normal-incidence absorption is highest at the lower end of the peak search, c/(4D)/1000 = ${hz(peak.f)}: any resonance lies below it and peakHz is that limit, not a peak; the facing's resistance or mass is far outside what panels are made with`,
     });
   }
   return out;

@@ -1,5 +1,5 @@
 /**
- * The calculation contract on the command line (SPEC.md section 6):
+ * The calculation contract on the command line (docs/contract.md):
  *   npm run --silent calc -- evaluate|rate|resonator|reverb|air FILE     (FILE "-" = stdin)
  * Prints the result as JSON on stdout, exit 0. Every refusal is JSON on stderr with exit 2:
  * {"error": "invalid input", "issues": [{"field", "message"}]}, or {"error", "message"} for a

@@ -1,8 +1,8 @@
 /**
- * The reverberation check of a room (SPEC.md section 3, step 2 and 4): Sabine and Eyring times
+ * The reverberation check of a room: Sabine and Eyring times
  * per octave 63 Hz–4 kHz before and after treatment, against the target, with the absorption
  * the treated room still lacks. The numbers come from the engine (lib/acoustics reverberation:
- * REFERENCES.md 8.1, air absorption by ISO 9613-1 at the exact mid-band frequencies); this file
+ * Sabine and Eyring, air absorption by ISO 9613-1 at the exact mid-band frequencies); this file
  * only assembles the room, compares and words the result.
  */
 import { OCTAVE_LABELS } from "@/lib/acoustics/bands";

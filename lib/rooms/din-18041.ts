@@ -1,11 +1,14 @@
 /**
- * DIN 18041:2016-03 "Hörsamkeit in Räumen", room group A (REFERENCES.md 9.1).
+ * DIN 18041:2016-03 "Hörsamkeit in Räumen", room group A.
  *
  * Formulas, validity ranges and the rule "T_soll stated mathematically rounded to two decimals"
- * are as confirmed in a public secondary summary of the 2016 edition; cite the standard itself.
- * That T_soll is compared with the mean of the 500 Hz and 1 kHz octaves, and the shape of the
- * frequency tolerance band (the standard's figures), are from memory only: the band is marked
- * "indicative" everywhere it is shown until someone checks it against the standard.
+ * as a plasterboard manufacturer's building-physics guide quotes the 2016 edition, cross-checked
+ * with an independent implementation and with a published sports-hall table that the A5 formula
+ * reproduces; cite the standard itself. The frequency tolerance band (the standard's figures)
+ * was not found in the standard's text or a manufacturer's guide: the range below is the one two
+ * independent open implementations of the 2016 edition give, the same for every group A use, so
+ * it is marked "indicative" everywhere it is shown until someone checks it against the standard.
+ * That T_soll is compared with the mean of the 500 Hz and 1 kHz octaves is from memory.
  */
 
 export const DIN_GROUPS = ["A1", "A2", "A3", "A4", "A5"] as const;
@@ -64,10 +67,10 @@ function formatVolume(volume: number): string {
 }
 
 /**
- * Tolerance band of T/T_soll per octave [MEMORY, low confidence, REFERENCES.md 9.1]:
- * 0.8–1.2 from 250 Hz to 2 kHz; widening to about 0.65–1.45 at 125 Hz and 0.5–1.7 at 63 Hz;
- * about 0.65–1.2 at 4 kHz. Recalled for the speech groups A2–A5; group A1 (music) has a
- * different low-frequency shape that we have no numbers for, so it uses the same band.
+ * Tolerance band of T/T_soll per octave, indicative: 0.8–1.2 from 250 Hz to 2 kHz, 0.65–1.45 at
+ * 125 Hz and 0.5–1.7 at 63 Hz, 0.65–1.2 at 4 kHz, as two independent open implementations of
+ * DIN 18041:2016 give it for every group A use. No separate 2016 range for music (A1) was found
+ * (the 2004 edition had one), so A1 uses the same.
  */
 export const DIN_TOLERANCE_RATIOS: Record<string, { low: number; high: number }> = {
   "63": { low: 0.5, high: 1.7 },
@@ -79,5 +82,5 @@ export const DIN_TOLERANCE_RATIOS: Record<string, { low: number; high: number }>
   "4000": { low: 0.65, high: 1.2 },
 };
 
-/** The octaves whose mean DIN 18041 compares with T_soll [MEMORY]. */
+/** The octaves whose mean DIN 18041 compares with T_soll (from memory). */
 export const DIN_MEAN_OCTAVES = [500, 1000] as const;

@@ -1,12 +1,16 @@
 /**
- * The built-in library of common room finishes, with octave-band absorption coefficients
- * 125–4000 Hz (63 Hz only where a value is known).
+ * The built-in library of room finishes, with octave-band absorption coefficients 125–4000 Hz.
  *
- * Provenance, honestly: every finish value below is a typical handbook figure recalled from
- * memory, not copied from a table we could check, so each carries "typical, from memory".
- * Real products vary widely (mounting, thickness, air space, paint); use a test report of the
- * actual product as a project material where it matters. The one exception is the opening to a
- * large space, whose α = 1 is the usual idealisation (sound that leaves does not come back).
+ * Each value is a published one, with its source in the data so that screens and documents can
+ * print it: the book, edition, table and printed pages, the original source the book credits for
+ * the row, and the row as the book describes it. The figures were read in open transcriptions of
+ * the printed tables, not in the printed books, and say so ("as transcribed"). A finish for which
+ * no published row was found keeps a value recalled from memory, and says that instead.
+ *
+ * 63 Hz: none of these tables gives a 63 Hz value for these rows, so none is given ("no data"),
+ * rather than extrapolated. Real products vary widely (mounting, thickness, air space, paint): use
+ * a test report of the actual product as a project material where it matters. The opening to a
+ * large space is α = 1 by definition (sound that leaves does not come back).
  */
 import { z } from "zod";
 import { octaveRecordSchema, type OctaveRecord } from "./octaves";
@@ -14,8 +18,19 @@ import { octaveRecordSchema, type OctaveRecord } from "./octaves";
 export const MATERIAL_CATEGORIES = ["wall", "floor", "ceiling", "opening", "furnishing", "any"] as const;
 export type MaterialCategory = (typeof MATERIAL_CATEGORIES)[number];
 
-/** "published" only with the exact table named in `source`. */
-export type MaterialProvenance = "typical, from memory" | "published" | "by definition";
+export type MaterialProvenance = "published, as transcribed" | "from memory" | "by definition";
+
+/** Where a published row was printed. */
+export interface Citation {
+  /** the book: authors, title, edition, publisher and year */
+  work: string;
+  /** where in the book: appendix or table, and printed pages */
+  table: string;
+  /** the original source the book credits for the row, if it names one */
+  credited: string | null;
+  /** the row as the transcription of the table names the finish */
+  row: string;
+}
 
 export interface Material {
   /** stable kebab-case key, stored with surfaces and openings */
@@ -24,8 +39,12 @@ export interface Material {
   category: MaterialCategory;
   /** absorption coefficient by nominal octave label, "125" … "4000" (and "63" where known) */
   alpha: OctaveRecord;
+  /** one line for screens and documents: the citation, or why there is none */
   source: string;
+  /** the same, short enough for a line under a field: "Cox & D'Antonio 2017, App. A, after Harris (1991)" */
+  short: string;
   provenance: MaterialProvenance;
+  citation: Citation | null;
 }
 
 /**
@@ -36,41 +55,82 @@ export interface Material {
 export const materialAlphaSchema = octaveRecordSchema("absorption coefficient, 0 to 1.5", 0, 1.5);
 export type MaterialAlpha = z.infer<typeof materialAlphaSchema>;
 
-const RECALLED = "Typical handbook value, recalled from memory and not checked against a published table";
+interface Work {
+  work: string;
+  table: string;
+  /** author, year and place, for a line on screen */
+  short: string;
+}
+
+const COX: Work = {
+  work: "T. J. Cox & P. D'Antonio, Acoustic Absorbers and Diffusers, 3rd ed., CRC Press 2017",
+  table: "Appendix A, Table of absorption coefficients, pp. 475–479",
+  short: "Cox & D'Antonio 2017, App. A",
+};
+const LONG: Work = {
+  work: "M. Long, Architectural Acoustics, 2nd ed., Academic Press 2014",
+  table: "Table 7.1 (ASTM C423, mounting E400: 400 mm air space)",
+  short: "Long 2014, Table 7.1",
+};
+const BIES: Work = {
+  work: "D. A. Bies, C. H. Hansen & C. Q. Howard, Engineering Noise Control, 5th ed., 2017",
+  table: "Table 6.2",
+  short: "Bies, Hansen & Howard 2017, Table 6.2",
+};
+
+/** "Book, table, after its credited source: "row" (as transcribed)". */
+export function citationText(c: Citation): string {
+  return `${c.work}, ${c.table}${c.credited ? `, after ${c.credited}` : ""}: "${c.row}" (as transcribed from the printed table)`;
+}
 
 /** α at 125, 250, 500, 1000, 2000, 4000 Hz, in that order. */
 type Six = readonly [number, number, number, number, number, number];
 
-function typical(key: string, name: string, category: MaterialCategory, six: Six, note: string): Material {
-  const alpha = Object.fromEntries(["125", "250", "500", "1000", "2000", "4000"].map((label, i) => [label, six[i]]));
-  return { key, name, category, alpha, source: `${RECALLED}. ${note}`, provenance: "typical, from memory" };
+const octaves = (six: Six): OctaveRecord => Object.fromEntries(["125", "250", "500", "1000", "2000", "4000"].map((label, i) => [label, six[i]]));
+
+function published(key: string, name: string, category: MaterialCategory, six: Six, from: Work, credited: string | null, row: string): Material {
+  const citation: Citation = { work: from.work, table: from.table, credited, row };
+  const short = `${from.short}${credited ? `, after ${credited}` : ""}`;
+  return { key, name, category, alpha: octaves(six), source: citationText(citation), short, provenance: "published, as transcribed", citation };
+}
+
+const NOT_FOUND = "No published value was found for this finish: a typical handbook figure recalled from memory, not checked against a table";
+
+function recalled(key: string, name: string, category: MaterialCategory, six: Six, note: string): Material {
+  return { key, name, category, alpha: octaves(six), source: `${NOT_FOUND}. ${note}`, short: "from memory: no published value found", provenance: "from memory", citation: null };
 }
 
 export const MATERIALS: readonly Material[] = [
-  typical("painted-concrete", "Concrete, smooth, painted", "any", [0.01, 0.01, 0.01, 0.02, 0.02, 0.02], "Poured concrete, sealed by paint."),
-  typical("unpainted-concrete", "Concrete, smooth, unpainted", "any", [0.01, 0.02, 0.04, 0.06, 0.08, 0.1], "Fair-faced poured concrete."),
-  typical("concrete-block-unpainted", "Concrete block, coarse, unpainted", "wall", [0.36, 0.44, 0.31, 0.29, 0.39, 0.25], "Open-textured block; paint closes the pores and removes most of this."),
-  typical("concrete-block-painted", "Concrete block, painted", "wall", [0.1, 0.05, 0.06, 0.07, 0.09, 0.08], "Block wall with paint filling the surface pores."),
-  typical("plaster-on-masonry", "Plaster on masonry", "any", [0.01, 0.02, 0.02, 0.03, 0.04, 0.05], "Gypsum or lime plaster, smooth finish, on brick or block."),
-  typical("brick-unglazed", "Brick, unglazed, unpainted", "wall", [0.03, 0.03, 0.03, 0.04, 0.05, 0.07], "Exposed brickwork."),
-  typical("brick-painted", "Brick, painted", "wall", [0.01, 0.01, 0.02, 0.02, 0.02, 0.03], "Exposed brickwork, painted."),
-  typical("gypsum-board-on-studs", "Gypsum board on studs", "wall", [0.29, 0.1, 0.05, 0.04, 0.07, 0.09], "One layer of about 12.5 mm board on studs with an air space; the low-frequency value is panel resonance and depends on the build."),
-  typical("gypsum-board-ceiling", "Gypsum board ceiling, suspended", "ceiling", [0.15, 0.11, 0.04, 0.04, 0.07, 0.08], "Closed (unperforated) board on a suspension grid."),
-  typical("plywood-on-battens", "Plywood panelling on battens", "wall", [0.28, 0.22, 0.17, 0.09, 0.1, 0.11], "About 10 mm plywood over an air space on battens."),
-  typical("ceramic-tile", "Ceramic tile, glazed", "any", [0.01, 0.01, 0.01, 0.02, 0.02, 0.02], "Glazed tile or similar hard sealed stone on a solid backing."),
-  typical("glass-large-pane", "Glass, large heavy pane", "opening", [0.18, 0.06, 0.04, 0.03, 0.02, 0.02], "Large sheets of thick glass or glazed screens."),
-  typical("window-glass", "Window, ordinary glass", "opening", [0.35, 0.25, 0.18, 0.12, 0.07, 0.04], "Ordinary window glass in frames; the low-frequency value is pane resonance."),
-  typical("timber-door", "Door, solid timber", "opening", [0.14, 0.1, 0.06, 0.08, 0.1, 0.1], "Solid or heavy timber door, closed."),
-  typical("timber-floor-on-joists", "Timber floor on joists", "floor", [0.15, 0.11, 0.1, 0.07, 0.06, 0.07], "Boards on joists with a void beneath."),
-  typical("parquet-on-concrete", "Parquet on concrete", "floor", [0.04, 0.04, 0.07, 0.06, 0.06, 0.07], "Wood blocks or strip laid directly on a concrete slab."),
-  typical("vinyl-on-concrete", "Vinyl or linoleum on concrete", "floor", [0.02, 0.03, 0.03, 0.03, 0.03, 0.02], "Resilient sheet or tile bonded to a slab."),
-  typical("carpet-thin-on-concrete", "Carpet, thin, on concrete", "floor", [0.02, 0.04, 0.08, 0.2, 0.35, 0.4], "Low-pile carpet glued to a slab, no underlay."),
-  typical("carpet-heavy-on-underlay", "Carpet, heavy, on underlay", "floor", [0.08, 0.24, 0.57, 0.69, 0.71, 0.73], "Heavy carpet on a foam or felt underlay."),
-  typical("timber-stage", "Timber stage floor", "floor", [0.4, 0.3, 0.2, 0.17, 0.15, 0.1], "Boarded stage or platform over a large air space."),
-  typical("mineral-fibre-ceiling-tile", "Mineral-fibre ceiling tile, suspended", "ceiling", [0.45, 0.6, 0.7, 0.8, 0.85, 0.85], "Ordinary lay-in acoustic tile about 15 mm thick on a grid with a deep void; products range widely."),
-  typical("heavy-curtain", "Heavy curtain, draped", "furnishing", [0.14, 0.35, 0.55, 0.72, 0.7, 0.65], "Heavy velour gathered to about half its flat width, hung clear of the wall; area is the curtain's drawn area."),
-  typical("seating-upholstered-empty", "Upholstered seating, empty", "furnishing", [0.49, 0.66, 0.8, 0.88, 0.82, 0.7], "Per m² of floor covered by the seating block, not per seat."),
-  typical("audience-upholstered", "Audience in upholstered seats", "furnishing", [0.6, 0.74, 0.88, 0.96, 0.93, 0.85], "Per m² of floor covered by the seated audience, not per person."),
+  // hard surfaces
+  published("painted-concrete", "Concrete, smooth, painted or glazed", "any", [0.01, 0.01, 0.01, 0.02, 0.02, 0.02], COX, "Lynge (2001); Bobran (1973)", "smooth concrete, painted or glazed"),
+  published("unpainted-concrete", "Concrete, smooth, unpainted", "any", [0.01, 0.01, 0.02, 0.02, 0.02, 0.05], COX, "Lynge (2001); Bobran (1973)", "smooth concrete, unpainted"),
+  published("rough-concrete", "Concrete, rough", "any", [0.02, 0.03, 0.03, 0.03, 0.04, 0.07], COX, "ISO/TR 11690-3 (1997)", "rough concrete"),
+  published("concrete-block-unpainted", "Concrete block, coarse, unpainted", "wall", [0.36, 0.44, 0.31, 0.29, 0.39, 0.25], COX, "Harris (1991)", "concrete block, coarse (unpainted)"),
+  published("concrete-block-painted", "Concrete block, painted", "wall", [0.1, 0.05, 0.06, 0.07, 0.09, 0.08], COX, "Harris (1991); Everest (2001); Young (1959)", "concrete block, painted"),
+  published("plaster-on-masonry", "Plaster, smooth, on brick or tile", "any", [0.013, 0.015, 0.02, 0.03, 0.04, 0.05], COX, "Harris (1991)", "smooth plaster on brick or tile"),
+  published("lime-cement-plaster", "Lime cement plaster", "any", [0.02, 0.02, 0.03, 0.04, 0.05, 0.05], COX, "Bobran (1973)", "lime cement plaster"),
+  published("painted-plaster", "Plaster, painted", "any", [0.02, 0.02, 0.02, 0.02, 0.02, 0.02], COX, "Kristensen (1984); Lynge (2001)", "painted plaster"),
+  published("brick-unglazed", "Brick, unglazed, unpainted", "wall", [0.03, 0.03, 0.03, 0.04, 0.05, 0.07], COX, "Harris (1991)", "brick, unglazed"),
+  published("brick-painted", "Brick, unglazed, painted", "wall", [0.01, 0.01, 0.02, 0.02, 0.02, 0.03], COX, "Harris (1991)", "brick, unglazed, painted"),
+  recalled("ceramic-tile", "Ceramic tile, glazed", "any", [0.01, 0.01, 0.01, 0.02, 0.02, 0.02], "Glazed tile or similar hard sealed stone on a solid backing; the published rows for smooth painted or glazed concrete give the same figures."),
+  published("water-surface", "Water surface (pool)", "floor", [0.01, 0.01, 0.01, 0.01, 0.02, 0.02], COX, "Knudsen & Harris (1953)", "water surface (pool)"),
+  // boards and panelling
+  published("gypsum-board-on-studs", "Gypsum board 12.7 mm nailed to studs", "wall", [0.29, 0.1, 0.05, 0.04, 0.07, 0.09], COX, "Harris (1991)", "gypsum board 12.7 mm nailed to studs"),
+  published("gypsum-board-ceiling", "Plasterboard 13 mm on frame, 100 mm empty cavity", "any", [0.08, 0.11, 0.05, 0.03, 0.02, 0.03], COX, "Lynge (2001); Fasold & Winkler (1976)", "plasterboard 13 mm on frame, 100 mm empty cavity"),
+  published("plasterboard-mineral-wool", "Plasterboard 13 mm on frame, 100 mm cavity with mineral wool", "any", [0.3, 0.12, 0.08, 0.06, 0.06, 0.05], COX, "Lynge (2001); Fasold & Winkler (1976)", "plasterboard 13 mm on frame, 100 mm cavity with mineral wool"),
+  published("plasterboard-double-steel-frame", "2 × 13 mm plasterboard on steel frame, 50 mm mineral wool, painted", "any", [0.15, 0.1, 0.06, 0.04, 0.04, 0.05], COX, "Lynge (2001); Petersen (1983)", "2 × 13 mm plasterboard on steel frame, 50 mm mineral wool, painted"),
+  published("plywood-on-battens", "Plywood panelling 10 mm", "wall", [0.28, 0.22, 0.17, 0.09, 0.1, 0.11], COX, "Harris (1991); PTB", "plywood panelling 10 mm"),
+  published("wood-panelling-air-space", "Wood panelling 9.5–12.7 mm over 50–100 mm air space", "wall", [0.3, 0.25, 0.2, 0.17, 0.15, 0.1], COX, "Beranek (1954)", "wood panelling 9.5–12.7 mm, 50–100 mm air space"),
+  // ceilings
+  published("mineral-fibre-ceiling-tile", "Mineral-fibre ceiling tile 16 mm, suspended 400 mm", "ceiling", [0.68, 0.76, 0.6, 0.65, 0.82, 0.76], LONG, null, "standard mineral fibre, 5/8 in"),
+  published("mineral-fibre-tile-19mm", "Mineral-fibre ceiling tile 19 mm, suspended 400 mm", "ceiling", [0.72, 0.84, 0.7, 0.79, 0.76, 0.81], LONG, null, "standard mineral fibre, 3/4 in"),
+  published("mineral-tile-on-slab", "Mineral tile 13 mm fixed to the slab", "ceiling", [0.1, 0.25, 0.7, 0.85, 0.7, 0.6], BIES, null, "13 mm mineral tile fixed to the slab"),
+  published("mineral-tile-suspended-500", "Mineral tile 13 mm suspended 500 mm below the slab", "ceiling", [0.75, 0.7, 0.65, 0.85, 0.85, 0.9], BIES, null, "13 mm mineral tile suspended 500 mm below"),
+  // openings
+  published("glass-large-pane", "Glass, large heavy panes", "opening", [0.18, 0.06, 0.04, 0.03, 0.02, 0.02], COX, "Harris (1991); Everest (2001); Young (1959)", "glass, large heavy panes"),
+  published("window-glass", "Glass, ordinary window", "opening", [0.35, 0.25, 0.18, 0.12, 0.07, 0.04], COX, "Harris (1991); PTB", "glass, ordinary window"),
+  published("double-glazing", "Double glazing, 2–3 mm panes, gap over 30 mm", "opening", [0.15, 0.05, 0.03, 0.03, 0.02, 0.02], COX, "Lynge (2001); Fasold & Winkler (1976)", "double glazing, 2–3 mm panes, > 30 mm gap"),
+  published("timber-door", "Door, solid timber", "opening", [0.14, 0.1, 0.06, 0.08, 0.1, 0.1], COX, "Lynge (2001); Bobran (1973)", "solid timber door"),
   {
     key: "open-opening",
     name: "Open doorway or vent to a large space",
@@ -78,8 +138,24 @@ export const MATERIALS: readonly Material[] = [
     alpha: { "63": 1, "125": 1, "250": 1, "500": 1, "1000": 1, "2000": 1, "4000": 1 },
     source:
       "Idealisation: sound passing through an opening into a much larger space or outdoors does not come back, so the opening absorbs all of it (α = 1 in every band). An opening into a small or reverberant neighbouring room returns some sound and absorbs less.",
+    short: "by definition: α = 1",
     provenance: "by definition",
+    citation: null,
   },
+  // floors
+  published("timber-floor-on-joists", "Floor boards on joists", "floor", [0.15, 0.2, 0.1, 0.1, 0.1, 0.1], COX, "Fry (1987)", "floor boards on joists"),
+  published("wood-floor", "Wood floor", "floor", [0.15, 0.11, 0.1, 0.07, 0.06, 0.07], COX, "Harris (1991)", "wood floor"),
+  published("parquet-on-concrete", "Parquet in asphalt on concrete", "floor", [0.04, 0.04, 0.07, 0.06, 0.06, 0.07], COX, "Beranek (1954)", "parquet in asphalt on concrete"),
+  published("vinyl-on-concrete", "Linoleum or vinyl stuck to concrete", "floor", [0.02, 0.02, 0.03, 0.04, 0.04, 0.05], COX, "Lynge (2001); Petersen (1983)", "linoleum or vinyl stuck to concrete"),
+  recalled("timber-stage", "Timber stage floor", "floor", [0.4, 0.3, 0.2, 0.17, 0.15, 0.1], "Boarded stage or platform over a large air space."),
+  published("carpet-heavy-on-concrete", "Carpet, heavy, on concrete", "floor", [0.02, 0.06, 0.14, 0.37, 0.6, 0.65], COX, "Harris (1991)", "heavy carpet on concrete"),
+  recalled("carpet-thin-on-concrete", "Carpet, thin, glued to concrete", "floor", [0.02, 0.04, 0.08, 0.2, 0.35, 0.4], "Low-pile carpet glued to a slab, no underlay."),
+  published("carpet-thin-on-underlay", "Carpet, thin (6 mm), on underlay", "floor", [0.03, 0.09, 0.2, 0.54, 0.7, 0.72], COX, "Parkin, Humphreys & Cowell (1979)", "thin (6 mm) carpet on underlay"),
+  published("carpet-heavy-on-underlay", "Carpet, thick (9 mm), on underlay", "floor", [0.08, 0.08, 0.3, 0.6, 0.75, 0.8], COX, "Harris (1991)", "thick (9 mm) carpet on underlay"),
+  // furnishings
+  published("heavy-curtain", "Heavy velour curtain 0.61 kg/m², draped to half its area", "furnishing", [0.14, 0.35, 0.55, 0.77, 0.7, 0.6], COX, "Beranek (1954)", "heavy velour curtain 0.61 kg/m², draped to half area"),
+  published("seating-upholstered-empty", "Upholstered seating, empty (per m² of seating)", "furnishing", [0.44, 0.6, 0.77, 0.89, 0.82, 0.7], COX, "Bies & Hansen (1996)", "upholstered seating, unoccupied (per m² of seating)"),
+  published("audience-upholstered", "Audience in theatre seats (per m² of seating)", "furnishing", [0.41, 0.58, 0.8, 0.9, 0.92, 0.89], COX, "Beranek (1954); Davies, Orlowski & Lam (1994)", "occupied theatre seating (per m² of seating)"),
 ];
 
 const BY_KEY = new Map(MATERIALS.map((material) => [material.key, material]));

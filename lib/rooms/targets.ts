@@ -1,7 +1,7 @@
 /**
- * Reverberation-time targets by room use (REFERENCES.md section 9): DIN 18041:2016 group A,
- * ANSI/ASA S12.60-2010 Part 1, a common-practice range, or values entered by hand. Each target
- * names its source and provenance in the data, so screens and documents can print them.
+ * Reverberation-time targets by room use: DIN 18041:2016 group A, ANSI/ASA S12.60-2010 Part 1,
+ * a common-practice range, or values entered by hand. Each target names its source and
+ * provenance in the data, so screens and documents can print them.
  */
 import { OCTAVE_LABELS } from "@/lib/acoustics/bands";
 import { DIN_FORMULAS, DIN_MEAN_OCTAVES, DIN_TOLERANCE_RATIOS, dinTsoll } from "./din-18041";
@@ -33,6 +33,9 @@ export interface Target {
   perOctave: TargetBand[];
 }
 
+/** Where the DIN tolerance band comes from, said wherever it is shown. */
+export const DIN_BAND_PROVENANCE = "indicative, not from the standard's text (as two independent open implementations of the 2016 edition give it)";
+
 const silent = (f: number): TargetBand => ({ f, seconds: null, low: null, high: null, indicative: false });
 
 function din(spec: Extract<TargetSpec, { kind: "din-18041" }>, volume: number): Target {
@@ -43,14 +46,13 @@ function din(spec: Extract<TargetSpec, { kind: "din-18041" }>, volume: number): 
     spec,
     label: `DIN 18041 group ${spec.group} (${formula.use})`,
     source: `DIN 18041:2016-03, room group ${spec.group}: T_soll = ${expression}${spec.group === "A5" ? " (2.0 s from 10 000 m³)" : ""}, rounded to two decimals`,
-    provenance:
-      "formula: published (DIN 18041:2016-03, confirmed in a secondary summary of the standard); tolerance band: indicative, from memory",
+    provenance: `formula: published (DIN 18041:2016-03, as quoted in a manufacturer's building-physics guide and cross-checked); tolerance band: ${DIN_BAND_PROVENANCE}`,
     kind: "band" as const,
     meanOf: DIN_MEAN_OCTAVES,
   };
   const musicNote =
-    spec.group === "A1" ? " The music group's low-frequency band shape is not verified: the speech groups' band is shown." : "";
-  const bandNote = `The tolerance band per octave is indicative: recalled from the standard's figures, not checked.${musicNote} The 2016 targets are, from memory, for the occupied room (about 80 % occupancy).`;
+    spec.group === "A1" ? " No separate music range of the 2016 edition was found, so the music group's low-frequency band shape is not verified: the range for the other uses is shown." : "";
+  const bandNote = `The tolerance band per octave is indicative: not found in the standard's text; the range is the one two independent open implementations of the 2016 edition give for every group A use.${musicNote} The 2016 targets are, from memory, for the occupied room (about 80 % occupancy).`;
   if (!(volume > 0)) {
     return { ...base, nominal: null, note: bandNote, warnings: ["DIN 18041 targets need the room's volume."], perOctave: OCTAVE_LABELS.map(silent) };
   }
@@ -73,7 +75,7 @@ function din(spec: Extract<TargetSpec, { kind: "din-18041" }>, volume: number): 
   };
 }
 
-/** ANSI/ASA S12.60-2010/Part 1 core learning spaces (REFERENCES.md 9.2). */
+/** ANSI/ASA S12.60-2010/Part 1 core learning spaces. */
 export const ANSI_S12_60_LIMITS = [
   { upTo: 283, seconds: 0.6 },
   { upTo: 566, seconds: 0.7 },
@@ -93,7 +95,7 @@ function ansi(spec: Extract<TargetSpec, { kind: "ansi-s12-60" }>, volume: number
     label: "ANSI/ASA S12.60 Part 1 (classrooms)",
     source:
       "ANSI/ASA S12.60-2010/Part 1, core learning spaces: RT60 ≤ 0.6 s up to 283 m³ (10 000 ft³), ≤ 0.7 s for 283–566 m³ (20 000 ft³)",
-    provenance: "published (limits confirmed in public summaries of the 2002 edition, which agree with the 2010 text as we recall it)",
+    provenance: "published (the limits as four independent summaries of the standard agree on them; the standard's table itself was not read)",
     note,
     kind: "limit",
     nominal: limit?.seconds ?? null,
@@ -106,7 +108,7 @@ function ansi(spec: Extract<TargetSpec, { kind: "ansi-s12-60" }>, volume: number
 }
 
 const COMMON_PRACTICE_WORDS = { office: "offices", "open-plan": "open-plan spaces", restaurant: "restaurants" } as const;
-/** 0.4–0.8 s, a rule of thumb of the trade (REFERENCES.md 9.3), read at mid frequencies. */
+/** 0.4–0.8 s, a rule of thumb of the trade with no single source, read at mid frequencies. */
 export const COMMON_PRACTICE_RANGE = { low: 0.4, high: 0.8, octaves: [500, 1000, 2000] as readonly number[] };
 
 function commonPractice(spec: Extract<TargetSpec, { kind: "common-practice" }>): Target {

@@ -26,6 +26,8 @@ function ownView(m: ProjectMaterial): MaterialView {
     category: m.category as Material["category"],
     alpha: JSON.parse(m.alpha) as OctaveRecord,
     source: m.source,
+    short: m.source,
+    citation: null,
     provenance: report ? "from a test report" : "entered by the consultant",
     report: report ? summarizeAttachment(report) : null,
     own: true,

@@ -41,8 +41,14 @@ function endCorrection(b: BuildUp, eps: number): number {
   return 2 * ((8 / (3 * Math.PI)) * (f.holeDiameter / 2) * psi);
 }
 
-/** Facing impedance normalised by ρc: Maa (holes) or Stinson's slit (slots). */
-function facingZ(b: BuildUp, f: number, a: Air): C {
+/**
+ * End resistance in units of R_s/ε, R_s = ½·sqrt(2ηωρ0): Maa's own for micro-perforation,
+ * 2·R_s per face for ordinary holes and slots (Ingard 1953; Cox & D'Antonio 2009, ch. 7).
+ */
+const endResistanceFactor = (b: BuildUp) => (b.facing.kind === "micro-perforated" ? 1 : 4);
+
+/** The facing's in-hole (or in-slit) and end impedances, normalised by ρc: Maa (holes) or Stinson's slit (slots). */
+function facingParts(b: BuildUp, f: number, a: Air): { inHole: C; ends: C } {
   const w = 2 * Math.PI * f;
   const eps = openArea(b);
   const tEnd = endCorrection(b, eps);
@@ -51,15 +57,39 @@ function facingZ(b: BuildUp, f: number, a: Air): C {
     const lambda = multiply(fc.slotWidth / 2, sqrt(complex(0, (w * a.rho) / a.eta))) as C;
     const F = subtract(ONE, divide(tanh(lambda), lambda)) as C;
     const inSlit = divide(complex(0, (w * fc.thickness) / (eps * a.c)), F) as C;
-    const ends = complex(Math.sqrt((w * a.rho * a.eta) / 2) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c));
-    return add(inSlit, ends) as C;
+    const rs = 0.5 * Math.sqrt(2 * a.eta * w * a.rho);
+    return { inHole: inSlit, ends: complex((endResistanceFactor(b) * rs) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c)) };
   }
   const d = fc.holeDiameter;
   const t = fc.thickness;
   const x = (d / 2) * Math.sqrt((w * a.rho) / a.eta);
-  const r = ((32 * a.eta * t) / (eps * a.rho * a.c * d * d)) * (Math.sqrt(1 + (x * x) / 32) + ((Math.SQRT2 / 32) * x * d) / t);
-  const m = ((w * t) / (eps * a.c)) * (1 + 1 / Math.sqrt(9 + (x * x) / 2) + tEnd / t);
-  return complex(r, m);
+  const rs = 0.5 * Math.sqrt(2 * a.eta * w * a.rho);
+  const r = ((32 * a.eta * t) / (eps * a.rho * a.c * d * d)) * Math.sqrt(1 + (x * x) / 32);
+  const m = ((w * t) / (eps * a.c)) * (1 + 1 / Math.sqrt(9 + (x * x) / 2));
+  return { inHole: complex(r, m), ends: complex((endResistanceFactor(b) * rs) / (a.rho * a.c * eps), (w * tEnd) / (eps * a.c)) };
+}
+
+/**
+ * The facing as a 2×2 matrix. Thin against the wavelength (k·t' ≤ 0.3 at the top of the 5 kHz
+ * band, 5623 Hz): the in-hole and end impedances in series. Thick: half the end impedance, a layer of the holes'
+ * equivalent fluid (ρ_eff from the in-hole impedance, bulk modulus ρ0c², porosity ε), the other
+ * half (Allard & Atalla 2009, ch. on perforated plates).
+ */
+function facingMatrix(b: BuildUp, f: number, a: Air): Matrix {
+  const { inHole, ends } = facingParts(b, f, a);
+  const eps = openArea(b);
+  const tPrime = b.facing.thickness + endCorrection(b, eps);
+  const topOfBands = 1000 * 10 ** 0.75;
+  if (((2 * Math.PI * topOfBands) / a.c) * tPrime <= 0.3) return [ONE, add(inHole, ends) as C, ZERO, ONE];
+  const q = (2 * Math.PI * f * b.facing.thickness) / a.c;
+  // jωρ_eff t/(ε ρ0 c) = inHole, so ρ_eff/ρ0 = inHole·ε/(j q)
+  const relative = divide(multiply(inHole, eps), complex(0, q)) as C;
+  const root = sqrt(relative) as C;
+  const zh = divide(root, eps) as C;
+  const kt = multiply(root, q) as C;
+  const layer: Matrix = [cos(kt), multiply(J, multiply(zh, sin(kt))) as C, divide(multiply(J, sin(kt)), zh) as C, cos(kt)];
+  const half: Matrix = [ONE, multiply(ends, 0.5) as C, ZERO, ONE];
+  return matmul(matmul(half, layer), half);
 }
 
 function tanh(z: C): C {
@@ -105,7 +135,7 @@ function matmul(A: Matrix, B: Matrix): Matrix {
 function surfaceZ(b: BuildUp, f: number, theta: number, a: Air): C {
   const k0 = (2 * Math.PI * f) / a.c;
   const s2 = Math.sin(theta) ** 2;
-  let T: Matrix = [ONE, facingZ(b, f, a), ZERO, ONE];
+  let T: Matrix = facingMatrix(b, f, a);
   for (const layer of layersOf(b)) {
     let kz: C;
     let zz: C;
@@ -161,26 +191,36 @@ export function baselineEvaluate(b: BuildUp, angles = 16, maxDeg = 78, perBand =
   return { thirds, peakHz: baselinePeak(b, a) };
 }
 
-/** The peak below c/(4D) by an 80-point log grid and golden sections (the engine brackets on 40 points and refines by Brent's method; both converge on the same maximum). */
+/**
+ * The peak below c/(4D): every local maximum of a log grid 1/70 decade apart over the three
+ * decades refined by golden sections, the highest kept (the engine brackets on its band samples
+ * and a grid and refines its best candidates by Brent's method: both must land on the same,
+ * highest maximum).
+ */
 function baselinePeak(b: BuildUp, a: Air): number {
   const upper = a.c / (4 * b.cavity.depth);
   const lower = upper / 1000;
   const alpha = (lf: number) => alphaOf(surfaceZ(b, Math.exp(lf), 0, a), 0);
-  const step = Math.log(1000) / 79;
-  let best = 0;
-  let bestAlpha = -1;
-  for (let i = 0; i < 80; i++) {
-    const v = alpha(Math.log(lower) + i * step);
-    if (v > bestAlpha) [best, bestAlpha] = [i, v];
+  const points = 211;
+  const step = Math.log(1000) / (points - 1);
+  const grid = Array.from({ length: points }, (_, i) => alpha(Math.log(lower) + i * step));
+  // every local maximum of the grid is refined by golden sections; the highest wins
+  let bestF = upper;
+  let bestValue = -1;
+  for (let i = 0; i < points; i++) {
+    if ((i > 0 && grid[i] < grid[i - 1]) || (i < points - 1 && grid[i] < grid[i + 1])) continue;
+    let lo = Math.log(lower) + Math.max(i - 1, 0) * step;
+    let hi = Math.log(lower) + Math.min(i + 1, points - 1) * step;
+    const g = (Math.sqrt(5) - 1) / 2;
+    while (hi - lo > 1e-8) {
+      const x1 = hi - g * (hi - lo);
+      const x2 = lo + g * (hi - lo);
+      if (alpha(x1) < alpha(x2)) lo = x1;
+      else hi = x2;
+    }
+    const f = i === points - 1 && Math.log(upper) - 0.5 * (lo + hi) < 1e-7 ? upper : Math.exp(0.5 * (lo + hi));
+    const value = alpha(Math.log(f));
+    if (value > bestValue) [bestF, bestValue] = [f, value];
   }
-  let lo = Math.log(lower) + Math.max(best - 1, 0) * step;
-  let hi = Math.log(lower) + Math.min(best + 1, 79) * step;
-  const g = (Math.sqrt(5) - 1) / 2;
-  while (hi - lo > 1e-8) {
-    const x1 = hi - g * (hi - lo);
-    const x2 = lo + g * (hi - lo);
-    if (alpha(x1) < alpha(x2)) lo = x1;
-    else hi = x2;
-  }
-  return best === 79 && Math.log(upper) - 0.5 * (lo + hi) < 1e-7 ? upper : Math.exp(0.5 * (lo + hi));
+  return bestF;
 }

@@ -57,6 +57,9 @@ describe("build-ups", () => {
     ["holes as large as their pitch", { spec: { ...SPEC, facing: { ...SPEC.facing, holeDiameter: 0.04 } } }, "spec.facing.holeDiameter"],
     ["a negative cavity", { spec: { ...SPEC, cavity: { depth: -0.1, partitioned: true } } }, "spec.cavity.depth"],
     ["an infill thicker than the cavity", { spec: { ...SPEC, infill: { thickness: 0.3, flowResistivity: 10000, position: "on-backing", model: "miki" } } }, "spec.infill.thickness"],
+    // legal numbers below the contract's practical minimums: such a spec would break the check of every room using it
+    ["a hole of 1e-300 m", { spec: { ...SPEC, facing: { ...SPEC.facing, holeDiameter: 1e-300 } } }, "spec.facing.holeDiameter"],
+    ["a cavity of 5e-324 m", { spec: { ...SPEC, cavity: { depth: 5e-324, partitioned: true } } }, "spec.cavity.depth"],
     ["borders wider than the module", { borderX: 0.35 }, "borderX"],
     ["no name", { name: " " }, "name"],
   ])("refuses %s with 422 naming the field, writing nothing", async (_what, over, field) => {

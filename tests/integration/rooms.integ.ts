@@ -29,7 +29,7 @@ const materials = () => import("@/app/api/v1/projects/[projectId]/materials/rout
 const flat = (a: number) => ({ "125": a, "250": a, "500": a, "1000": a, "2000": a, "4000": a });
 
 async function material(name: string, a: number): Promise<string> {
-  const res = await call((await materials()).POST, { method: "POST", cookie: cookie.consultant, params: { projectId }, body: { name, alpha: flat(a), source: "values of the shared references' room example (section 8.3)" } });
+  const res = await call((await materials()).POST, { method: "POST", cookie: cookie.consultant, params: { projectId }, body: { name, alpha: flat(a), source: "values of a worked room example, computed in numpy" } });
   expect(res.status).toBe(201);
   return res.json.key;
 }
@@ -40,8 +40,8 @@ async function create(body: Record<string, unknown>) {
 
 describe("the reverberation check through the API", () => {
   it("reproduces the worked room example: 10 × 8 × 3 m, Sabine about 0.565 s at 500 Hz", async () => {
-    // Shared references, section 8.3 [COMPUTED there with c = 343 m/s and air absorption at the
-    // nominal 500 Hz for 20 °C / 50 %]: floor 80 m² α 0.05, ceiling 80 m² α 0.70, long walls
+    // A worked room, computed in numpy with c = 343 m/s and air absorption (ISO 9613-1) at the
+    // nominal 500 Hz for 20 °C / 50 %: floor 80 m² α 0.05, ceiling 80 m² α 0.70, long walls
     // 60 m² α 0.05, short walls 48 m² α 0.10 → Sabine 0.5653 s, Eyring 0.4909 s at 500 Hz.
     // We use c from the temperature and the exact mid-band frequency, so allow 1 %.
     const hard = await material("Hard (α 0.05)", 0.05);
@@ -58,7 +58,7 @@ describe("the reverberation check through the API", () => {
     expect(at500.before.sabine).toBeLessThan(0.5653 * 1.01);
     expect(at500.before.eyring).toBeGreaterThan(0.4909 * 0.99);
     expect(at500.before.eyring).toBeLessThan(0.4909 * 1.01);
-    // DIN 18041 A2 for 240 m³: 0.37·lg 240 − 0.14 = 0.7407 → 0.74 s (formula, shared references 9.1).
+    // DIN 18041:2016-03 group A2 for 240 m³: 0.37·lg 240 − 0.14 = 0.7407 → 0.74 s, by hand.
     expect(res.json.targetResolved.nominal).toBe(0.74);
   });
 

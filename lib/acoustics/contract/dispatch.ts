@@ -1,29 +1,29 @@
-/** Run a command on unknown JSON: parse, then calculate. Used by the command line. */
+/**
+ * Run a command on unknown JSON: parse, calculate, and return the result only when every
+ * number in it is finite. Used by the command line and the HTTP routes alike.
+ */
+import { nonFiniteErrors } from "./finite";
 import { type ContractCommand, type ContractInput, type FieldError, parseContractInput } from "./parse";
 import { runAir, runEvaluate, runRate, runResonator, runReverb } from "./run";
 
 export type ContractResult = { ok: true; output: unknown } | { ok: false; errors: FieldError[] };
 
-function run<C extends ContractCommand>(command: C, json: unknown, calculate: (input: ContractInput<C>) => unknown): ContractResult {
-  const parsed = parseContractInput(command, json);
-  return parsed.ok ? { ok: true, output: calculate(parsed.value) } : parsed;
+const RUNNERS: { [C in ContractCommand]: (input: ContractInput<C>) => unknown } = {
+  evaluate: runEvaluate,
+  rate: runRate,
+  resonator: runResonator,
+  reverb: runReverb,
+  air: runAir,
+};
+
+function run<C extends ContractCommand>(command: C, value: ContractInput<C>): unknown {
+  return RUNNERS[command](value);
 }
 
 export function runContract(command: string, json: unknown): ContractResult {
-  switch (command) {
-    case "evaluate":
-      return run(command, json, runEvaluate);
-    case "rate":
-      return run(command, json, runRate);
-    case "resonator":
-      return run(command, json, runResonator);
-    case "reverb":
-      return run(command, json, runReverb);
-    case "air":
-      return run(command, json, runAir);
-    default: {
-      const parsed = parseContractInput(command, json);
-      return parsed.ok ? { ok: false, errors: [] } : parsed;
-    }
-  }
+  const parsed = parseContractInput(command, json);
+  if (!parsed.ok) return parsed;
+  const output = run(command as ContractCommand, parsed.value as never);
+  const errors = nonFiniteErrors(output);
+  return errors.length ? { ok: false, errors } : { ok: true, output };
 }

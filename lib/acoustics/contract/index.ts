@@ -1,4 +1,4 @@
-/** The calculation contract of SPEC.md section 6: schemas, parsing and the five calculations. */
+/** The calculation contract (docs/contract.md): schemas, parsing and the five calculations. */
 export {
   airInputSchema,
   evaluateInputSchema,
@@ -24,3 +24,6 @@ export {
 } from "./parse";
 export { runAir, runEvaluate, runRate, runResonator, runReverb, toBuildUp, type EvaluateOutput } from "./run";
 export { runContract, type ContractResult } from "./dispatch";
+export { nonFiniteErrors, nonFinitePaths } from "./finite";
+export { LIMITS, type Limit } from "./fields";
+export { MAX_SURFACES } from "./schemas";

@@ -1,21 +1,21 @@
 /**
- * One zod schema per input of the calculation contract (SPEC.md section 6), shared by the
+ * One zod schema per input of the calculation contract (docs/contract.md), shared by the
  * command line and the HTTP API. Physical consistency (holes smaller than their pitch, open
  * area in (0, 1), infill no thicker than the cavity, …) is checked here so that both surfaces
  * refuse the same inputs with the same messages.
  */
 import { z } from "zod";
 import { ISO_354_LABELS, OCTAVE_LABELS } from "../bands";
-import { airSchema, alpha, atmosphereSchema, between, number, oneOf, positive } from "./fields";
+import { LIMITS, airSchema, alpha, atmosphereSchema, between, boundedList, number, oneOf, positive, practical } from "./fields";
 
 const ignored = () => z.number().nullable().optional();
 
 const holeFacing = (kind: "round-holes" | "micro-perforated") =>
   z.strictObject({
     kind: z.literal(kind),
-    thickness: positive("m", 0.1),
-    holeDiameter: positive("m", 0.1),
-    pitch: positive("m", 0.5),
+    thickness: practical(LIMITS.facingThickness),
+    holeDiameter: practical(LIMITS.holeDiameter),
+    pitch: practical(LIMITS.pitch),
     grid: oneOf(["square", "staggered"]),
     slotWidth: ignored(),
     slotPitch: ignored(),
@@ -23,9 +23,9 @@ const holeFacing = (kind: "round-holes" | "micro-perforated") =>
 
 const slotFacing = z.strictObject({
   kind: z.literal("slots"),
-  thickness: positive("m", 0.1),
-  slotWidth: positive("m", 0.1),
-  slotPitch: positive("m", 0.5),
+  thickness: practical(LIMITS.facingThickness),
+  slotWidth: practical(LIMITS.slotWidth),
+  slotPitch: practical(LIMITS.slotPitch),
   holeDiameter: ignored(),
   pitch: ignored(),
   grid: z.string().nullable().optional(),
@@ -37,8 +37,8 @@ const facingSchema = z.discriminatedUnion("kind", [holeFacing("round-holes"), ho
 
 const infillSchema = z
   .strictObject({
-    thickness: positive("m", 2),
-    flowResistivity: positive("Pa·s/m²", 1e7),
+    thickness: practical(LIMITS.infillThickness),
+    flowResistivity: practical(LIMITS.flowResistivity),
     position: oneOf(["behind-facing", "on-backing"]),
     model: oneOf(["delany-bazley", "miki"]),
   })
@@ -48,7 +48,7 @@ export const evaluateInputSchema = z
   .strictObject({
     facing: facingSchema,
     cavity: z.strictObject({
-      depth: positive("m", 2),
+      depth: practical(LIMITS.cavityDepth),
       partitioned: z.boolean({ error: "required: true for a partitioned (honeycomb) cavity, false for an open one" }),
     }),
     infill: infillSchema.optional().default(null),
@@ -87,10 +87,10 @@ export const rateInputSchema = z.strictObject({
 
 export const resonatorInputSchema = z
   .strictObject({
-    neckArea: positive("m²", 10),
+    neckArea: practical(LIMITS.neckArea),
     neckLength: between("m", 0, 10),
-    volume: positive("m³", 10_000),
-    neckRadius: positive("m", 10).optional(),
+    volume: practical(LIMITS.resonatorVolume),
+    neckRadius: practical(LIMITS.neckRadius).optional(),
     ends: oneOf(["flanged-flanged", "flanged-free", "none"]),
     air: airSchema,
   })
@@ -104,18 +104,25 @@ export const resonatorInputSchema = z
     }
   });
 
+/**
+ * A room's surfaces, openings and furnishings: a detailed model has a few hundred; more is not a
+ * room but a flood, refused before any of it is read.
+ */
+export const MAX_SURFACES = 2000;
+
 const octaveAlpha = z.strictObject(
   Object.fromEntries(OCTAVE_LABELS.map((label) => [String(label), label === 63 ? alpha().optional() : alpha()])),
 );
 
 export const reverbInputSchema = z
   .strictObject({
-    volume: positive("m³", 1e6),
-    surfaces: z
-      .array(z.strictObject({ area: positive("m²", 1e6), alpha: octaveAlpha }), {
-        error: "must be a list of surfaces with area and alpha",
-      })
-      .min(1, { error: "must list at least one surface" }),
+    volume: practical(LIMITS.roomVolume),
+    surfaces: boundedList(z.strictObject({ area: positive("m²", 1e6), alpha: octaveAlpha }), {
+      min: 1,
+      max: MAX_SURFACES,
+      what: "surfaces with area and alpha",
+      tooFew: "must list at least one surface",
+    }),
     air: atmosphereSchema,
     method: oneOf(["sabine", "eyring"]),
   })

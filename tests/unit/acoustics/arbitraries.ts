@@ -53,3 +53,43 @@ export function arbitraryBuildUp(options: { withinRange?: boolean } = {}): fc.Ar
       },
     }));
 }
+
+/**
+ * Any input the evaluate schema accepts, from its practical minimums to its maximums, the
+ * extremes included: for properties that must hold over the whole contract.
+ */
+export function arbitraryEvaluateInput(limits: Record<"facingThickness" | "holeDiameter" | "pitch" | "slotWidth" | "slotPitch" | "cavityDepth" | "infillThickness" | "flowResistivity", { min: number; max: number }>) {
+  const within = (l: { min: number; max: number }) => fc.double({ min: l.min, max: l.max, noNaN: true });
+  const ratio = fc.double({ min: 1.000001, max: 1e4, noNaN: true });
+  const clamp = (x: number, l: { min: number; max: number }) => Math.min(l.max, Math.max(l.min, x));
+  const hole = fc
+    .record({ kind: fc.constantFrom("round-holes" as const, "micro-perforated" as const), thickness: within(limits.facingThickness), holeDiameter: within(limits.holeDiameter), ratio, grid: fc.constantFrom("square" as const, "staggered" as const) })
+    .map(({ ratio: r, ...f }) => ({ ...f, pitch: clamp(f.holeDiameter * r, limits.pitch) }))
+    .filter((f) => f.pitch > f.holeDiameter);
+  const slot = fc
+    .record({ kind: fc.constant("slots" as const), thickness: within(limits.facingThickness), slotWidth: within(limits.slotWidth), ratio })
+    .map(({ ratio: r, ...f }) => ({ ...f, slotPitch: clamp(f.slotWidth * r, limits.slotPitch) }))
+    .filter((f) => f.slotPitch > f.slotWidth);
+  const infill = fc.record({
+    share: fc.double({ min: 0, max: 1, noNaN: true }),
+    flowResistivity: within(limits.flowResistivity),
+    position: fc.constantFrom("behind-facing" as const, "on-backing" as const),
+    model: fc.constantFrom("delany-bazley" as const, "miki" as const),
+  });
+  return fc
+    .record({
+      facing: fc.oneof(hole, slot),
+      depth: within(limits.cavityDepth),
+      partitioned: fc.boolean(),
+      infill: fc.option(infill, { nil: null }),
+      temperature: fc.double({ min: -20, max: 50, noNaN: true }),
+      pressure: fc.double({ min: 10_000, max: 200_000, noNaN: true }),
+    })
+    .filter(({ depth, infill: i }) => !i || depth >= limits.infillThickness.min)
+    .map(({ facing, depth, partitioned, infill: i, temperature, pressure }) => ({
+      facing,
+      cavity: { depth, partitioned },
+      infill: i && { thickness: clamp(depth * i.share, { min: limits.infillThickness.min, max: depth }), flowResistivity: i.flowResistivity, position: i.position, model: i.model },
+      air: { temperature, pressure },
+    }));
+}

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { ISO_354_LABELS, OCTAVES, OCTAVE_LABELS, THIRD_OCTAVES, THIRD_OCTAVE_LABELS, bandSamples, octavesFromThirds, thirdOctaveSamples } from "@/lib/acoustics/bands";
 
-// REFERENCES.md section 0: centres 1000·10^(k/10), edges fm·10^(±1/20), seven log-midpoints of
+// IEC 61260 base-ten bands: centres 1000·10^(k/10), edges fm·10^(±1/20); Cavitas averages seven log-midpoints of
 // seven equal log steps; octaves 1000·10^(3k/10), each the mean of three one-third octaves.
 describe("bands", () => {
   it("21 one-third octaves 50 Hz – 5 kHz labelled by nominal centre", () => {

@@ -8,10 +8,10 @@ import { roundHoleOpenArea } from "@/lib/acoustics/perforation";
 
 const { c } = airProperties();
 
-describe("single resonator, f0 = (c/2π)·sqrt(S/(V·L')) (REFERENCES.md 2, Rayleigh; Levine & Schwinger)", () => {
+describe("single resonator, f0 = (c/2π)·sqrt(S/(V·L')) (Rayleigh, Theory of Sound; Levine & Schwinger, Phys. Rev. 73, 1948)", () => {
   const a = 0.01;
   const S = Math.PI * a * a;
-  // T2 [COMPUTED], c = 343.232 m/s
+  // computed from the formula in numpy, c = 343.232 m/s
   it("H1 both ends flanged: 118.31 Hz", () => {
     expect(resonatorHz({ neckArea: S, neckLength: 0.05, volume: 1e-3, ends: "flanged-flanged" })).toBeCloseTo(118.31, 2);
   });
@@ -34,10 +34,12 @@ describe("single resonator, f0 = (c/2π)·sqrt(S/(V·L')) (REFERENCES.md 2, Rayl
   });
 });
 
-// T11 [COMPUTED]: panels over an air cavity. Columns: lumped with 0.85d, with Fok (Cavitas's
-// helmholtzHz), Ingard, Allard & Atalla, and the exact cot root with 0.85d.
+// Panels over an air cavity, f0 = (c/2π)·sqrt(ε/(D·t')) (Cox & D'Antonio, Acoustic Absorbers and
+// Diffusers, 2009, ch. 7), computed in numpy with the end corrections of: 0.85d; Fok (Cavitas's
+// helmholtzHz; Fok 1941 via Melling 1973); Ingard 1953; Allard & Atalla 2009; and the exact root
+// of ωt'/(εc) = cot(ωD/c) with 0.85d.
 const square = (d: number, b: number, t: number): Facing => ({ kind: "round-holes", thickness: t, holeDiameter: d, pitch: b, grid: "square" });
-const T11: { name: string; facing: Facing; D: number; f085: number; fok: number; ingard: number; allard: number; cot: number }[] = [
+const PANELS: { name: string; facing: Facing; D: number; f085: number; fok: number; ingard: number; allard: number; cot: number }[] = [
   { name: "P1", facing: square(0.005, 0.025, 0.006), D: 0.05, f085: 427.7, fok: 451.6, ingard: 448.8, allard: 446.7, cot: 417.1 },
   { name: "P2", facing: square(0.008, 0.016, 0.0125), D: 0.1, f085: 551.0, fok: 619.7, ingard: 614.2, allard: 607.7, cot: 472.9 },
   {
@@ -56,8 +58,8 @@ const T11: { name: string; facing: Facing; D: number; f085: number; fok: number;
   { name: "P5", facing: square(0.01, 0.05, 0.018), D: 0.2, f085: 133.0, fok: 138.6, ingard: 138.0, allard: 137.5, cot: 128.0 },
 ];
 
-describe("lumped panel resonance (REFERENCES.md 3.1, 3.3, table T11 [COMPUTED])", () => {
-  for (const p of T11) {
+describe("lumped panel resonance (computed in numpy from the formulas named above)", () => {
+  for (const p of PANELS) {
     it(`${p.name}: helmholtzHz with Fok's end correction = ${p.fok} Hz, and the comparison variants`, () => {
       if (p.facing.kind === "slots") throw new Error("holes only");
       const { holeDiameter: d, pitch: b, grid, thickness: t } = p.facing;
@@ -79,7 +81,7 @@ describe("lumped panel resonance (REFERENCES.md 3.1, 3.3, table T11 [COMPUTED])"
     expect(cotRootHz(0.15, tPrime, 0.05, c)).toBeCloseTo(647.7, 1);
   });
 
-  it("the cot root solves ωt'/(εc) = cot(ωD/c) and always lies below the lumped estimate (REFERENCES.md 3.1)", () => {
+  it("the cot root solves ωt'/(εc) = cot(ωD/c) and always lies below the lumped estimate (cot x < 1/x on (0, π/2))", () => {
     fc.assert(
       fc.property(
         fc.double({ min: 0.002, max: 0.3, noNaN: true }),

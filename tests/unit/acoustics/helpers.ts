@@ -1,7 +1,7 @@
 /** Shared helpers of the acoustics tests: reference routes written independently of the engine. */
 import type { BuildUp, HoleFacing } from "@/lib/acoustics/build-up";
 
-/** Nominal one-third-octave centres 100–5000 Hz, as the REFERENCES.md tables list them. */
+/** Nominal one-third-octave centres 100–5000 Hz (IEC 61260 preferred numbers), where the computed tables give values. */
 export const NOMINAL = [100, 125, 160, 200, 250, 315, 400, 500, 630, 800, 1000, 1250, 1600, 2000, 2500, 3150, 4000, 5000];
 
 /** Square-grid pitch that gives open area eps for hole diameter d: ε = πd²/(4b²). */
@@ -17,7 +17,7 @@ export function overAir(facing: BuildUp["facing"], depth: number, partitioned = 
 
 /**
  * Statistical absorption of a locally reacting surface with normalised impedance z = ζe^{jμ},
- * closed form of London (1950) as given by Kuttruff, Room Acoustics (REFERENCES.md 6, [MEMORY]
+ * closed form of London (1950) as given by Kuttruff, Room Acoustics (the formula from memory,
  * for the formula, self-verified there against the Paris integral to 6 decimals):
  * α = 8(cosμ/ζ)[1 − (cosμ/ζ)ln(1 + 2ζcosμ + ζ²) + (cos2μ/(ζ sinμ))·atan(ζ sinμ/(1 + ζcosμ))].
  */

@@ -5,9 +5,9 @@ import { findPeak } from "@/lib/acoustics/peak";
 import { buildUpModel } from "@/lib/acoustics/spectrum";
 import { NOMINAL, holes, overAir } from "./helpers";
 
-// Maa's micro-perforated panel (REFERENCES.md section 4; Maa, JASA 104(5) 1998, mass term
-// 1/sqrt(9 + x²/2)). Every value below is [COMPUTED] in REFERENCES.md with numpy; the formula
-// itself is [MEMORY] there. Tolerances: the printed rounding.
+// Maa's micro-perforated panel (Maa, JASA 104(5) 1998, mass term 1/sqrt(9 + x²/2); Noise Control
+// Eng. J. 29(3) 1987). Every value below was computed from Maa's formulas in numpy, not by this
+// engine; the printed form of the formulas is from memory. Tolerances: the printed rounding.
 const air = airProperties();
 
 interface MaaSet {
@@ -50,7 +50,7 @@ function root(g: (f: number) => number, lo: number, hi: number): number {
   return 0.5 * (lo + hi);
 }
 
-describe.each(SETS)("Maa micro-perforated panel $name (T4 and its table) [COMPUTED]", (set) => {
+describe.each(SETS)("Maa micro-perforated panel $name (computed in numpy)", (set) => {
   const facing = holes("micro-perforated", set.d, set.d, set.eps);
   const model = buildUpModel(overAir(facing, set.D));
 

@@ -75,7 +75,7 @@ describe("physical properties of the engine (fast-check)", () => {
     );
   });
 
-  it("the full-model peak lies below the lumped estimate for these panels (REFERENCES.md 3.1: the lumped f0 sits above)", () => {
+  it("the full-model peak lies below the lumped estimate for these panels (the lumped f0 drops cot(kD) ≈ 1/(kD), which sits above)", () => {
     fc.assert(
       fc.property(panel, (p) => {
         const e = evaluateBuildUp(buildUp(p));

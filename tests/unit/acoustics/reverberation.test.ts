@@ -15,9 +15,10 @@ import {
 
 const MIDBANDS = [-4, -3, -2, -1, 0, 1, 2, 3].map((k) => 1000 * 10 ** ((3 * k) / 10));
 
-describe("ISO 9613-1 air absorption (REFERENCES.md 8.2)", () => {
-  // T8b: formula [SRC-CONFIRMED] against two public implementations; values [COMPUTED].
-  const T8b: [number, number, number[]][] = [
+describe("ISO 9613-1:1993 air absorption", () => {
+  // The standard's equations (checked term by term against two public implementations of it);
+  // values computed from them in numpy at the exact mid-band frequencies.
+  const ATTENUATION: [number, number, number[]][] = [
     [10, 70, [0.122, 0.411, 1.043, 1.928, 3.658, 9.664, 32.77, 116.882]],
     [15, 20, [0.272, 0.647, 1.221, 2.704, 8.166, 28.191, 88.786, 201.761]],
     [15, 50, [0.142, 0.479, 1.217, 2.236, 4.164, 10.786, 36.22, 128.573]],
@@ -27,7 +28,7 @@ describe("ISO 9613-1 air absorption (REFERENCES.md 8.2)", () => {
     [30, 70, [0.065, 0.256, 0.963, 3.135, 7.407, 12.746, 23.058, 59.261]],
     [23, 50, [0.112, 0.418, 1.332, 3.043, 5.218, 9.906, 26.84, 92.055]],
   ];
-  it.each(T8b)("T8b %i °C, %i %% at the exact mid-band frequencies (dB/km)", (temperature, humidity, row) => {
+  it.each(ATTENUATION)("%i °C, %i %% at the exact mid-band frequencies (dB/km)", (temperature, humidity, row) => {
     MIDBANDS.forEach((f, i) => expect(Math.abs(airAttenuationDbPerKm(f, { temperature, humidity }) - row[i])).toBeLessThan(6e-4));
   });
 
@@ -39,24 +40,24 @@ describe("ISO 9613-1 air absorption (REFERENCES.md 8.2)", () => {
     expect(airAttenuationDbPerKm(1000, { temperature: 20, humidity: 50 })).toBeCloseTo(4.6647, 4);
   });
 
-  it("rounded to 0.1 dB/km, 10 °C/70 % and 20 °C/70 % reproduce the remembered ISO 9613-2 Table 2 rows [MEMORY]", () => {
+  it("rounded to 0.1 dB/km, 10 °C/70 % and 20 °C/70 % reproduce ISO 9613-2:1996 Table 2 rows (from memory)", () => {
     const rounded = (t: number, h: number) => MIDBANDS.map((f) => airAttenuationDbPerKm(f, { temperature: t, humidity: h })).map((v) => (v < 100 ? Number(v.toFixed(1)) : Math.round(v)));
     expect(rounded(10, 70)).toEqual([0.1, 0.4, 1.0, 1.9, 3.7, 9.7, 32.8, 117]);
     expect(rounded(20, 70).slice(0, 7)).toEqual([0.1, 0.3, 1.1, 2.8, 5.0, 9.0, 22.9]);
   });
 
-  it("T8c: m = α/(10 lg e) in 1/m at 20 °C, 50 % [exact conversion]", () => {
+  it("m = α/(10 lg e) in 1/m at 20 °C, 50 % (exact conversion, ISO 354:2003; values computed in numpy)", () => {
     const m = MIDBANDS.map((f) => airPowerAttenuation(f, { temperature: 20, humidity: 50 }));
     [2.828e-5, 1.025e-4, 3.035e-4, 6.294e-4, 1.074e-3, 2.269e-3, 6.774e-3, 2.393e-2].forEach((v, i) => expect(Math.abs(m[i] / v - 1)).toBeLessThan(2e-3));
   });
 });
 
-describe("Sabine and Eyring (REFERENCES.md 8.1, 8.3)", () => {
-  it("T8a: 24 ln10 / c [COMPUTED]", () => {
+describe("Sabine and Eyring (Kuttruff, Room Acoustics, ch. 5; Eyring, JASA 1, 1930)", () => {
+  it("24 ln10 / c, computed by hand", () => {
     [[331.3, 0.1668], [340, 0.16254], [343, 0.16111], [343.2, 0.16102], [344, 0.16065]].forEach(([c, k]) => expect(DECAY_CONSTANT / c).toBeCloseTo(k, 5));
   });
 
-  // 8.3 room example [COMPUTED]: 10 × 8 × 3 m, c = 343 m/s, m at the nominal band frequency.
+  // A room computed in numpy: 10 × 8 × 3 m, c = 343 m/s, m at the nominal band frequency.
   const V = 240;
   const S = 268;
   const A = 80 * 0.05 + 80 * 0.7 + 60 * 0.05 + 48 * 0.1;

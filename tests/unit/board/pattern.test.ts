@@ -106,7 +106,7 @@ describe("marks or tone", () => {
     // Ø8 mm: 0.8 px at 100 px/m, 1.6 px at 200 px/m.
     expect(visibleDetail(100, square).mode).toBe("tone");
     expect(visibleDetail(200, square).mode).toBe("marks");
-    // Open area of the square grid, REFERENCES.md 3.2: π·8² / (4·32²) = π/64 = 0.0491.
+    // Open area of the square grid, exact geometry: π·8² / (4·32²) = π/64 = 0.0491.
     expect(visibleDetail(100, square).tone).toBeCloseTo(Math.PI / 64, 12);
     // A micro-perforation of π·0.5² / (4·5²) = 0.79 % would vanish; it gets the lightest tone.
     const micro: Facing = { kind: "micro-perforated", thickness: 0.001, holeDiameter: 0.0005, pitch: 0.005, grid: "square" };

@@ -19,7 +19,7 @@ describe("shoebox surfaces", () => {
       ["ceiling", "Ceiling", "ceiling", 10, 8],
       ["floor", "Floor", "floor", 10, 8],
     ]);
-    // By hand: 2·(10·8) + 2·(10·3) + 2·(8·3) = 160 + 60 + 48 = 268 m² (REFERENCES.md 8.3).
+    // By hand: 2·(10·8) + 2·(10·3) + 2·(8·3) = 160 + 60 + 48 = 268 m².
     expect(totalArea(surfaces)).toBe(268);
     expect(surfaces.map(grossArea)).toEqual([30, 24, 30, 24, 80, 80]);
     expect(roomVolume({ kind: "shoebox", length: 10, width: 8, height: 3 })).toBe(240);
