@@ -122,11 +122,18 @@ describe("calculation routes", () => {
     expect(JSON.stringify(res.json)).not.toMatch(/null/);
   });
 
-  it("reverb refuses 200 000 surfaces with 400 naming the list, without reading them one by one", async () => {
+  it("reverb refuses one surface more than its cap of 2000 with 400 naming the list", async () => {
     const surface = { area: 1, alpha: flat(0.1) };
-    const res = await call((await routes.reverb()).POST, { method: "POST", cookie: cookies.consultant, body: { ...reverbInput, surfaces: Array(200_000).fill(surface) } });
+    const res = await call((await routes.reverb()).POST, { method: "POST", cookie: cookies.consultant, body: { ...reverbInput, surfaces: Array(2001).fill(surface) } });
     expect(res.status).toBe(400);
     expect(res.json.error.issues).toEqual([{ field: "surfaces", message: expect.stringMatching(/at most 2000/) }]);
+  });
+
+  it("reverb refuses 200 000 surfaces (16 MB) by the size of the body, 413, before any is read", async () => {
+    const surface = { area: 1, alpha: flat(0.1) };
+    const res = await call((await routes.reverb()).POST, { method: "POST", cookie: cookies.consultant, body: { ...reverbInput, surfaces: Array(200_000).fill(surface) } });
+    expect(res.status).toBe(413);
+    expect(res.json.error.message).toMatch(/larger than this action accepts/);
   });
 
   it("rate refuses an absorption value that is not a number, naming the band", async () => {
